@@ -1,0 +1,6 @@
+namespace CellCheck.Cli;
+
+internal static class Program
+{
+    private static int Main(string[] args) => args.Length >= 0 ? 0 : 2;
+}

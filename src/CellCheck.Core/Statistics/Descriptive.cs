@@ -1,0 +1,88 @@
+namespace CellCheck.Core.Statistics;
+
+/// <summary>
+/// Numerically careful descriptive statistics on spans. Sums are taken about a shift (the first value) and then
+/// corrected (the corrected two-pass algorithm of Chan, Golub &amp; LeVeque 1983), so values with many constant
+/// leading digits (NIST StRD SmLs07-09) keep their precision.
+/// </summary>
+public static class Descriptive
+{
+    /// <summary>Arithmetic mean; NaN for an empty span.</summary>
+    public static double Mean(ReadOnlySpan<double> x)
+    {
+        if (x.IsEmpty)
+        {
+            return double.NaN;
+        }
+
+        var shift = x[0];
+        var sum = 0.0;
+        foreach (var v in x)
+        {
+            sum += v - shift;
+        }
+
+        return shift + (sum / x.Length);
+    }
+
+    /// <summary>Sum of squared deviations about the mean, by the corrected two-pass formula.</summary>
+    public static double SumOfSquares(ReadOnlySpan<double> x) => SumOfSquares(x, Mean(x));
+
+    /// <summary>Sum of squared deviations about a given mean, with the correction term for the rounding error of the mean.</summary>
+    public static double SumOfSquares(ReadOnlySpan<double> x, double mean)
+    {
+        if (x.IsEmpty)
+        {
+            return double.NaN;
+        }
+
+        var ss = 0.0;
+        var comp = 0.0;
+        foreach (var v in x)
+        {
+            var d = v - mean;
+            ss += d * d;
+            comp += d;
+        }
+
+        return Math.Max(0.0, ss - (comp * comp / x.Length));
+    }
+
+    /// <summary>Sample variance with divisor n − 1; NaN when n &lt; 2.</summary>
+    public static double Variance(ReadOnlySpan<double> x) => x.Length < 2 ? double.NaN : SumOfSquares(x) / (x.Length - 1);
+
+    /// <summary>Sample standard deviation with divisor n − 1; NaN when n &lt; 2.</summary>
+    public static double StandardDeviation(ReadOnlySpan<double> x) => Math.Sqrt(Variance(x));
+
+    /// <summary>Median (mean of the two middle values for even n). Uses <paramref name="scratch"/> (length ≥ n) and leaves it reordered.</summary>
+    public static double Median(ReadOnlySpan<double> x, Span<double> scratch)
+    {
+        if (x.IsEmpty)
+        {
+            return double.NaN;
+        }
+
+        var s = scratch[..x.Length];
+        x.CopyTo(s);
+        s.Sort();
+        var mid = s.Length / 2;
+        return s.Length % 2 == 1 ? s[mid] : 0.5 * (s[mid - 1] + s[mid]);
+    }
+
+    /// <summary>Median of a span (allocates a scratch copy; use the scratch overload in hot loops).</summary>
+    public static double Median(ReadOnlySpan<double> x) => Median(x, new double[x.Length]);
+
+    /// <summary>True when every value equals the first (zero spread).</summary>
+    public static bool IsConstant(ReadOnlySpan<double> x)
+    {
+        for (var i = 1; i < x.Length; i++)
+        {
+            if (x[i] != x[0])
+            {
+                return false;
+            }
+        }
+
+        return true;
+    }
+}

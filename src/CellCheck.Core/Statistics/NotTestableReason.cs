@@ -1,0 +1,30 @@
+namespace CellCheck.Core.Statistics;
+
+/// <summary>Stable reason codes for a test that cannot be computed. Codes never change meaning across versions.</summary>
+public static class NotTestableReason
+{
+    /// <summary>Fewer values than the method needs (Shapiro-Wilk 3, Anderson-Darling 8, D'Agostino-Pearson 8).</summary>
+    public const string TooFewValues = "too-few-values";
+
+    /// <summary>All values identical (or residuals all zero): no spread to standardise by.</summary>
+    public const string ZeroSpread = "zero-spread";
+
+    /// <summary>More values than the p-value approximation is valid for (Shapiro-Wilk above 5000).</summary>
+    public const string TooManyValues = "too-many-values";
+
+    /// <summary>Fewer than two groups with at least two values each.</summary>
+    public const string TooFewGroups = "too-few-groups";
+
+    /// <summary>Every group has two values: absolute deviations from the centre are equal within each group, so the
+    /// within-group variation of the deviations is zero and the F ratio is degenerate.</summary>
+    public const string AllGroupsOfTwo = "all-groups-of-two";
+
+    /// <summary>At least one group has zero variance, so its log-variance is minus infinity (Bartlett).</summary>
+    public const string ZeroVarianceGroup = "zero-variance-group";
+
+    /// <summary>The within-group variation of the statistic's working values is zero: the F ratio is undefined.</summary>
+    public const string DegenerateWithinGroups = "degenerate-within-groups";
+
+    /// <summary>No residual degrees of freedom remain (every cell a singleton).</summary>
+    public const string NoResidualDegreesOfFreedom = "no-residual-df";
+}

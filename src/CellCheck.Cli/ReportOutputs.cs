@@ -1,0 +1,36 @@
+using CellCheck.IO;
+using CellCheck.IO.Reports;
+
+namespace CellCheck.Cli;
+
+/// <summary>Writes the report files a user asked for, atomically, never over an input.</summary>
+internal static class ReportOutputs
+{
+    public static int Write(CheckRunResult run, string? json, string? outDir, TextWriter output, TextWriter error)
+    {
+        var targets = new List<string>();
+        if (json is not null)
+        {
+            targets.Add(json);
+        }
+
+        if (outDir is not null)
+        {
+            targets.Add(Path.Combine(outDir, "report.json"));
+        }
+
+        string[] inputs = [run.Design.Path, run.Design.DataPath];
+        foreach (var target in targets)
+        {
+            var problem = AtomicFile.Write(target, inputs, s => JsonReportWriter.Write(run.Report, s, ToolVersion.Text));
+            if (problem is not null)
+            {
+                return ProblemPrinter.Print([problem], error);
+            }
+
+            output.WriteLine("Wrote " + target);
+        }
+
+        return 0;
+    }
+}

@@ -1,0 +1,62 @@
+using CellCheck.Core.Cells;
+using CellCheck.Core.Residuals;
+using CellCheck.Core.Statistics;
+
+namespace CellCheck.Core.Analysis;
+
+/// <summary>
+/// Within-cell normality: Shapiro-Wilk and Anderson-Darling on each cell's residuals, with each test's p-values
+/// adjusted across the testable cells of the response (Holm by default).
+/// </summary>
+internal static class CellChecks
+{
+    public static List<CellResult> Run(CellPartition partition, ResidualSet residuals, double origin, AnalysisOptions options)
+    {
+        var count = partition.CellCount;
+        var sw = new TestOutcome[count];
+        var ad = new TestOutcome[count];
+        var moments = new MomentSummary[count];
+        var starts = partition.Values.Starts;
+        for (var c = 0; c < count; c++)
+        {
+            var cell = residuals.Residuals.AsSpan(starts[c], starts[c + 1] - starts[c]);
+            sw[c] = ShapiroWilk.Test(cell);
+            ad[c] = AndersonDarling.Test(cell);
+            moments[c] = Moments.Compute(partition.Values.Group(c));
+        }
+
+        var swAdjusted = Adjust(sw, options.Adjust);
+        var adAdjusted = Adjust(ad, options.Adjust);
+        var results = new List<CellResult>(count);
+        for (var c = 0; c < count; c++)
+        {
+            var m = moments[c];
+            CheckResult[] checks =
+            [
+                CheckResults.From(CheckNames.ShapiroWilk, sw[c], options.Alpha, swAdjusted[c]),
+                CheckResults.From(CheckNames.AndersonDarling, ad[c], options.Alpha, adAdjusted[c]),
+            ];
+            results.Add(new CellResult(partition.Levels(c), m.Count, origin + m.Mean, m.StandardDeviation, m.Skewness, m.ExcessKurtosis, checks));
+        }
+
+        return results;
+    }
+
+    private static double?[] Adjust(TestOutcome[] outcomes, AdjustMethod method)
+    {
+        var p = new double[outcomes.Length];
+        for (var i = 0; i < p.Length; i++)
+        {
+            p[i] = outcomes[i].IsTestable ? outcomes[i].P : double.NaN;
+        }
+
+        var adjusted = PValueAdjustment.Adjust(p, method);
+        var result = new double?[p.Length];
+        for (var i = 0; i < p.Length; i++)
+        {
+            result[i] = double.IsNaN(adjusted[i]) ? null : adjusted[i];
+        }
+
+        return result;
+    }
+}

@@ -1,0 +1,51 @@
+using CellCheck.Core.Residuals;
+using CellCheck.Core.Statistics;
+
+namespace CellCheck.Core.Analysis;
+
+/// <summary>
+/// Normality of the pooled internally studentized residuals (singleton cells, whose residuals are structurally
+/// zero, are left out): Shapiro-Wilk, Anderson-Darling and D'Agostino-Pearson K², with skewness and kurtosis.
+/// </summary>
+internal static class PooledChecks
+{
+    public const int ShapiroWilkLimit = 5000;
+
+    public static PooledResult Run(ResidualSet residuals, double alpha)
+    {
+        var values = new List<double>(residuals.Studentized.Length);
+        foreach (var r in residuals.Studentized)
+        {
+            if (double.IsFinite(r))
+            {
+                values.Add(r);
+            }
+        }
+
+        var notes = new List<string>();
+        var span = System.Runtime.InteropServices.CollectionsMarshal.AsSpan(values);
+        if (residuals.ResidualDf <= 0 || values.Count == 0)
+        {
+            notes.Add("No residual degrees of freedom: every cell holds a single value, so residuals cannot be judged.");
+            var reason = NotTestableReason.NoResidualDegreesOfFreedom;
+            return new PooledResult(residuals.Model, 0, residuals.ResidualDf, residuals.ResidualSd, double.NaN, double.NaN,
+                [CheckResults.NotTestable(CheckNames.ShapiroWilk, reason), CheckResults.NotTestable(CheckNames.AndersonDarling, reason),
+                 CheckResults.NotTestable(CheckNames.DagostinoPearson, reason)], notes);
+        }
+
+        if (values.Count > ShapiroWilkLimit)
+        {
+            notes.Add($"Shapiro-Wilk's p approximation holds up to {ShapiroWilkLimit} values; with {values.Count} the W statistic is shown without p. "
+                + "Judge by Anderson-Darling, D'Agostino-Pearson and the size of skewness and kurtosis.");
+        }
+
+        var moments = Moments.Compute(span);
+        CheckResult[] checks =
+        [
+            CheckResults.From(CheckNames.ShapiroWilk, ShapiroWilk.Test(span), alpha),
+            CheckResults.From(CheckNames.AndersonDarling, AndersonDarling.Test(span), alpha),
+            CheckResults.From(CheckNames.DagostinoPearson, DagostinoPearson.Test(span), alpha),
+        ];
+        return new PooledResult(residuals.Model, values.Count, residuals.ResidualDf, residuals.ResidualSd, moments.Skewness, moments.ExcessKurtosis, checks, notes);
+    }
+}

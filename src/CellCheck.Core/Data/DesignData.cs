@@ -1,0 +1,57 @@
+namespace CellCheck.Core.Data;
+
+/// <summary>
+/// The data of one design, columnar: factors, responses, the data-file line of every row, and the rows excluded
+/// per response (a row whose factor value is missing is excluded for every response).
+/// </summary>
+public sealed class DesignData
+{
+    public DesignData(
+        IReadOnlyList<FactorColumn> factors,
+        IReadOnlyList<ResponseColumn> responses,
+        int[] sourceLines,
+        IReadOnlyList<IReadOnlyList<ExcludedRow>> excluded)
+    {
+        ArgumentNullException.ThrowIfNull(factors);
+        ArgumentNullException.ThrowIfNull(responses);
+        ArgumentNullException.ThrowIfNull(sourceLines);
+        ArgumentNullException.ThrowIfNull(excluded);
+        if (excluded.Count != responses.Count)
+        {
+            throw new ArgumentException("one exclusion list per response is required", nameof(excluded));
+        }
+
+        foreach (var f in factors)
+        {
+            if (f.Codes.Length != sourceLines.Length)
+            {
+                throw new ArgumentException($"factor {f.Name} has {f.Codes.Length} rows, expected {sourceLines.Length}", nameof(factors));
+            }
+        }
+
+        foreach (var r in responses)
+        {
+            if (r.Values.Length != sourceLines.Length)
+            {
+                throw new ArgumentException($"response {r.Name} has {r.Values.Length} rows, expected {sourceLines.Length}", nameof(responses));
+            }
+        }
+
+        Factors = factors;
+        Responses = responses;
+        SourceLines = sourceLines;
+        Excluded = excluded;
+    }
+
+    public IReadOnlyList<FactorColumn> Factors { get; }
+
+    public IReadOnlyList<ResponseColumn> Responses { get; }
+
+    /// <summary>Line in the data file of each row (1-based, the header is line 1 for a plain file).</summary>
+    public int[] SourceLines { get; }
+
+    /// <summary>Rows excluded for each response, in the order of <see cref="Responses"/>.</summary>
+    public IReadOnlyList<IReadOnlyList<ExcludedRow>> Excluded { get; }
+
+    public int RowCount => SourceLines.Length;
+}

@@ -1,0 +1,30 @@
+namespace CellCheck.Core.Data;
+
+/// <summary>
+/// A factor held columnar: each distinct level label once, and one level index per row
+/// (<see cref="Missing"/> where the row has no value). Levels keep the order of first appearance.
+/// </summary>
+public sealed class FactorColumn
+{
+    /// <summary>Code of a row with no value for this factor.</summary>
+    public const int Missing = -1;
+
+    public FactorColumn(string name, IReadOnlyList<string> levels, int[] codes)
+    {
+        ArgumentNullException.ThrowIfNull(name);
+        ArgumentNullException.ThrowIfNull(levels);
+        ArgumentNullException.ThrowIfNull(codes);
+        Name = name;
+        Levels = levels;
+        Codes = codes;
+    }
+
+    /// <summary>Display name of the factor.</summary>
+    public string Name { get; }
+
+    /// <summary>Distinct level labels as written in the data file.</summary>
+    public IReadOnlyList<string> Levels { get; }
+
+    /// <summary>Level index per row, or <see cref="Missing"/>.</summary>
+    public int[] Codes { get; }
+}

@@ -1,0 +1,51 @@
+using CellCheck.Core.Cells;
+using CellCheck.Core.Statistics;
+
+namespace CellCheck.Core.Residuals;
+
+/// <summary>
+/// The cell-means model y_ij = μ_i + e_ij: residual = value − cell mean, leverage 1/n_i, pooled variance
+/// s² = Σ_i Σ_j e_ij² / (N − k), internally studentized residual e_ij / (s·√(1 − 1/n_i)).
+/// Singleton cells have leverage 1: residual 0 and studentized residual undefined (NaN).
+/// </summary>
+public sealed class CellMeansResiduals : IResidualSource
+{
+    public string Name => "cell-means";
+
+    public ResidualSet Compute(CellPartition partition)
+    {
+        ArgumentNullException.ThrowIfNull(partition);
+        var grouped = partition.Values;
+        var residuals = new double[grouped.Count];
+        var fitted = new double[grouped.Count];
+        var ss = 0.0;
+        for (var c = 0; c < grouped.GroupCount; c++)
+        {
+            var cell = grouped.Group(c);
+            var mean = Descriptive.Mean(cell);
+            var start = grouped.Starts[c];
+            for (var j = 0; j < cell.Length; j++)
+            {
+                fitted[start + j] = mean;
+                residuals[start + j] = cell[j] - mean;
+            }
+
+            ss += Descriptive.SumOfSquares(cell, mean);
+        }
+
+        var df = grouped.Count - grouped.GroupCount;
+        var s = df > 0 ? Math.Sqrt(ss / df) : double.NaN;
+        var studentized = new double[grouped.Count];
+        for (var c = 0; c < grouped.GroupCount; c++)
+        {
+            var n = grouped.Size(c);
+            var scale = n > 1 && s > 0 ? s * Math.Sqrt(1.0 - (1.0 / n)) : double.NaN;
+            for (var i = grouped.Starts[c]; i < grouped.Starts[c + 1]; i++)
+            {
+                studentized[i] = residuals[i] / scale;
+            }
+        }
+
+        return new ResidualSet(Name, residuals, fitted, studentized, s, df);
+    }
+}

@@ -1,0 +1,45 @@
+using CellCheck.Core.Analysis;
+using CellCheck.Core.Statistics;
+using CellCheck.IO.Data;
+using CellCheck.IO.Design;
+
+namespace CellCheck.IO;
+
+/// <summary>Reads a design and its data and runs every check: the whole job between the files and the reports.</summary>
+public static class CheckRun
+{
+    /// <summary>Runs the checks. <paramref name="adjust"/> and <paramref name="alpha"/> override the design file when given.</summary>
+    public static LoadResult<CheckRunResult> Run(string designPath, AdjustMethod? adjust = null, double? alpha = null)
+    {
+        var design = DesignReader.Read(designPath);
+        if (!design.Ok)
+        {
+            return LoadResult<CheckRunResult>.Failure(design.Problems);
+        }
+
+        var file = design.Value!;
+        var data = DataReader.Read(file);
+        if (!data.Ok)
+        {
+            return LoadResult<CheckRunResult>.Failure(data.Problems);
+        }
+
+        var options = new AnalysisOptions(alpha ?? file.Alpha, adjust ?? file.Adjust);
+        var responses = new List<ResponseReport>();
+        for (var r = 0; r < data.Value!.Responses.Count; r++)
+        {
+            responses.Add(ResponseAnalyzer.Analyze(data.Value, r, options));
+        }
+
+        var summary = new DesignSummary(designPath, file.DataText, file.Name, file.Factors.Select(f => f.Name).ToArray(),
+            file.RunOrder?.Column, options.Alpha, AdjustName(options.Adjust));
+        return LoadResult<CheckRunResult>.Success(new CheckRunResult(file, new CheckReport(summary, responses)));
+    }
+
+    public static string AdjustName(AdjustMethod method) => method switch
+    {
+        AdjustMethod.Holm => "holm",
+        AdjustMethod.BenjaminiHochberg => "bh",
+        _ => "none",
+    };
+}

@@ -1,0 +1,73 @@
+using System.Globalization;
+using CellCheck.Core.Data;
+
+namespace CellCheck.IO.Data;
+
+/// <summary>
+/// Builds a factor column while reading: each distinct label is stored once (looked up by span, so repeated
+/// labels allocate nothing) and every row gets a level index. At the end levels are put in natural order:
+/// numerically when every label is a number, otherwise ordinal text order.
+/// </summary>
+internal sealed class LevelInterner(string name, int capacity)
+{
+    private readonly Dictionary<string, int> _index = new(StringComparer.Ordinal);
+    private readonly List<string> _labels = [];
+    private readonly List<int> _codes = new(capacity);
+
+    public void Add(ReadOnlySpan<char> label)
+    {
+        if (label.IsEmpty)
+        {
+            _codes.Add(FactorColumn.Missing);
+            return;
+        }
+
+        var lookup = _index.GetAlternateLookup<ReadOnlySpan<char>>();
+        if (!lookup.TryGetValue(label, out var code))
+        {
+            code = _labels.Count;
+            var text = label.ToString();
+            _labels.Add(text);
+            _index.Add(text, code);
+        }
+
+        _codes.Add(code);
+    }
+
+    public FactorColumn Build()
+    {
+        var order = Enumerable.Range(0, _labels.Count).ToArray();
+        var numbers = new double[_labels.Count];
+        var numeric = true;
+        for (var i = 0; i < numbers.Length && numeric; i++)
+        {
+            numeric = double.TryParse(_labels[i], NumberStyles.Float, CultureInfo.InvariantCulture, out numbers[i]);
+        }
+
+        if (numeric)
+        {
+            Array.Sort(order, (a, b) => numbers[a].CompareTo(numbers[b]));
+        }
+        else
+        {
+            Array.Sort(order, (a, b) => string.CompareOrdinal(_labels[a], _labels[b]));
+        }
+
+        var remap = new int[order.Length];
+        var sorted = new string[order.Length];
+        for (var rank = 0; rank < order.Length; rank++)
+        {
+            remap[order[rank]] = rank;
+            sorted[rank] = _labels[order[rank]];
+        }
+
+        var codes = new int[_codes.Count];
+        for (var row = 0; row < codes.Length; row++)
+        {
+            var c = _codes[row];
+            codes[row] = c < 0 ? c : remap[c];
+        }
+
+        return new FactorColumn(name, sorted, codes);
+    }
+}

@@ -1,0 +1,16 @@
+using CellCheck.Core.Statistics;
+
+namespace CellCheck.IO.Design;
+
+/// <summary>A parsed and validated design file. <see cref="DataPath"/> is resolved against the design file's folder.</summary>
+public sealed record DesignFile(
+    string Path,
+    string? Name,
+    string DataPath,
+    string DataText,
+    SourceMark DataMark,
+    IReadOnlyList<ColumnSpec> Factors,
+    IReadOnlyList<ColumnSpec> Responses,
+    ColumnSpec? RunOrder,
+    double Alpha,
+    AdjustMethod Adjust);

@@ -1,0 +1,97 @@
+using CellCheck.Core.Problems;
+using CellCheck.Core.Statistics;
+using YamlDotNet.Core;
+using YamlDotNet.RepresentationModel;
+
+namespace CellCheck.IO.Design;
+
+/// <summary>
+/// Reads a design file (YAML, safe subset: plain mappings, sequences and scalars; tags carry no meaning) and
+/// validates it. Every problem is returned located (line and column), never thrown.
+/// </summary>
+public static class DesignReader
+{
+    /// <summary>Design files above this size are refused (a design is a few lines).</summary>
+    public const long MaxBytes = 1 << 20;
+
+    private static readonly string[] Keys = ["name", "data", "factors", "responses", "run_order", "alpha", "adjust"];
+
+    public static LoadResult<DesignFile> Read(string path)
+    {
+        ArgumentNullException.ThrowIfNull(path);
+        if (Directory.Exists(path))
+        {
+            return LoadResult<DesignFile>.Failure(new Problem(ProblemCodes.DesignUnreadable, path, null, null,
+                "This is a folder, not a design file.", "Give the path of the design's .yaml file."));
+        }
+
+        if (!File.Exists(path))
+        {
+            return LoadResult<DesignFile>.Failure(new Problem(ProblemCodes.DesignNotFound, path, null, null,
+                "The design file does not exist.", "Check the path; it is taken relative to the current folder."));
+        }
+
+        string text;
+        try
+        {
+            if (new FileInfo(path).Length > MaxBytes)
+            {
+                return LoadResult<DesignFile>.Failure(new Problem(ProblemCodes.DesignTooLarge, path, null, null,
+                    $"The design file is larger than {MaxBytes / 1024} KiB.", "A design file names columns and settings; keep the data in the data file."));
+            }
+
+            text = File.ReadAllText(path);
+        }
+        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
+        {
+            return LoadResult<DesignFile>.Failure(new Problem(ProblemCodes.DesignUnreadable, path, null, null,
+                "The design file cannot be read: " + ex.Message, "Check the file's permissions."));
+        }
+
+        return Parse(text, path);
+    }
+
+    /// <summary>Parses design text; <paramref name="path"/> names the file in problems and anchors the data path.</summary>
+    public static LoadResult<DesignFile> Parse(string text, string path)
+    {
+        ArgumentNullException.ThrowIfNull(text);
+        ArgumentNullException.ThrowIfNull(path);
+        YamlMappingNode root;
+        try
+        {
+            var stream = new YamlStream();
+            stream.Load(new StringReader(text));
+            if (stream.Documents.Count == 0 || stream.Documents[0].RootNode is not YamlMappingNode mapping)
+            {
+                return LoadResult<DesignFile>.Failure(new Problem(ProblemCodes.NotAMapping, path, 1, 1,
+                    "The design file is not a set of 'key: value' lines.", "Start from the example in the README: data, factors and responses keys."));
+            }
+
+            root = mapping;
+        }
+        catch (YamlException ex)
+        {
+            var duplicate = ex.Message.Contains("duplicate key", StringComparison.OrdinalIgnoreCase);
+            return LoadResult<DesignFile>.Failure(new Problem(duplicate ? ProblemCodes.DuplicateKey : ProblemCodes.YamlSyntax, path,
+                (int)ex.Start.Line, (int)ex.Start.Column,
+                duplicate ? "A key is written twice." : "The YAML cannot be read: " + FirstLine(ex.Message),
+                duplicate ? "Keep one of the two entries." : "Check indentation (spaces, not tabs), colons and brackets near this place."));
+        }
+
+        return new DesignValidator(path, root, Keys).Validate();
+    }
+
+    private static string FirstLine(string message)
+    {
+        var cut = message.IndexOf('\n', StringComparison.Ordinal);
+        return cut < 0 ? message : message[..cut];
+    }
+
+    internal static AdjustMethod? ParseAdjust(string text) => text switch
+    {
+        "holm" => AdjustMethod.Holm,
+        "bh" or "benjamini-hochberg" => AdjustMethod.BenjaminiHochberg,
+        "none" => AdjustMethod.None,
+        _ => null,
+    };
+}

@@ -1,0 +1,37 @@
+namespace CellCheck.IO;
+
+/// <summary>
+/// Stable codes of the problems CellCheck reports about the user's files. The README's error catalogue documents
+/// each with an example and the fix. A code never changes meaning; new codes are added, none are reused.
+/// </summary>
+public static class ProblemCodes
+{
+    public const string DesignNotFound = "design.not-found";
+    public const string DesignUnreadable = "design.unreadable";
+    public const string DesignTooLarge = "design.too-large";
+    public const string YamlSyntax = "design.yaml-syntax";
+    public const string NotAMapping = "design.not-a-mapping";
+    public const string UnknownKey = "design.unknown-key";
+    public const string DuplicateKey = "design.duplicate-key";
+    public const string MissingKey = "design.missing-key";
+    public const string WrongType = "design.wrong-type";
+    public const string EmptyList = "design.empty-list";
+    public const string DuplicateName = "design.duplicate-name";
+    public const string ResponseIsFactor = "design.response-is-factor";
+    public const string BadAlpha = "design.bad-alpha";
+    public const string BadAdjust = "design.bad-adjust";
+    public const string BadKind = "design.bad-kind";
+    public const string MissingColumn = "design.missing-column";
+
+    public const string DataNotFound = "data.not-found";
+    public const string DataUnreadable = "data.unreadable";
+    public const string DataEmpty = "data.empty";
+    public const string DataNoRows = "data.no-rows";
+    public const string DataUnsupportedFormat = "data.unsupported-format";
+    public const string DuplicateColumn = "data.duplicate-column";
+    public const string RaggedRow = "data.ragged-row";
+    public const string BadRunOrder = "data.bad-run-order";
+
+    public const string OutputIsInput = "output.is-input";
+    public const string OutputUnwritable = "output.unwritable";
+}

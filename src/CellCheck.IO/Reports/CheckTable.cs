@@ -1,0 +1,29 @@
+using CellCheck.Core.Analysis;
+using Spectre.Console;
+
+namespace CellCheck.IO.Reports;
+
+/// <summary>A table of checks: name, statistic, degrees of freedom, p and status.</summary>
+internal static class CheckTable
+{
+    public static void Write(IAnsiConsole console, string title, IReadOnlyList<CheckResult> checks)
+    {
+        var table = new Table().Border(TableBorder.Simple).Title(Markup.Escape(title));
+        table.AddColumn("check");
+        table.AddColumn(new TableColumn("statistic").RightAlignment());
+        table.AddColumn(new TableColumn("df").RightAlignment());
+        table.AddColumn(new TableColumn("p").RightAlignment());
+        table.AddColumn("status");
+        foreach (var k in checks)
+        {
+            table.AddRow(
+                TerminalReportWriter.Plain(k.Check),
+                TerminalReportWriter.Plain(k.Statistic is { } s ? NumberText.Value(s, 5) : "-"),
+                TerminalReportWriter.Plain(k.Df is { } df ? string.Join(", ", df.Select(d => NumberText.Value(d))) : "-"),
+                TerminalReportWriter.Plain(k.P is { } p ? NumberText.P(p) : "-"),
+                TerminalReportWriter.Plain(TerminalReportWriter.Status(k)));
+        }
+
+        console.Write(table);
+    }
+}

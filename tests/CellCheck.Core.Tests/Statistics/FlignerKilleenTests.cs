@@ -10,7 +10,7 @@ public sealed class FlignerKilleenTests
     private const double StatisticTolerance = 1e-12;
 
     // Both sides evaluate the chi-square upper tail to near double precision; 1e-9 leaves room for the statistic's
-    // rounding difference amplified by d ln p / d ln X².
+    // rounding difference amplified by d ln p / d ln X² (observed ≤ 1e-14).
     private const double PTolerance = 1e-9;
 
     [Theory]

@@ -73,7 +73,7 @@ public sealed class OneWayAnovaNistTests
 
     [Theory]
     // R 4.2.2 pf(F, df1, df2, lower.tail = FALSE) at the certified F (Fixtures/check-values.R). The far tails
-    // (1e-22, 1e-243) check that the p-value is not formed as 1 − CDF. Tolerance 1e-9, the brief's target for p-values
+    // (1e-22, 1e-243) check that the p-value is not formed as 1 − CDF. Tolerance 1e-9, the project's target for p-values
     // from MathNet functions; observed ≤ 7e-13.
     [InlineData("SmLs01t", 2.5832643372689516e-22)]
     [InlineData("SmLs08t", 4.0371418857532225e-243)]

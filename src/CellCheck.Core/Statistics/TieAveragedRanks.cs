@@ -1,0 +1,38 @@
+namespace CellCheck.Core.Statistics;
+
+/// <summary>Ranks 1..n of a sample, tied values sharing the mean of the ranks they occupy (mid-ranks).</summary>
+internal static class TieAveragedRanks
+{
+    /// <summary>Writes the mid-rank of each <paramref name="x"/>[i] into <paramref name="ranks"/>[i]. Values are
+    /// tied only when exactly equal. NaN values are not allowed.</summary>
+    public static void Compute(ReadOnlySpan<double> x, Span<double> ranks)
+    {
+        var n = x.Length;
+        var keys = x.ToArray();
+        var order = new int[n];
+        for (var i = 0; i < n; i++)
+        {
+            order[i] = i;
+        }
+
+        Array.Sort(keys, order);
+        var start = 0;
+        while (start < n)
+        {
+            var end = start + 1;
+            while (end < n && keys[end] == keys[start])
+            {
+                end++;
+            }
+
+            // positions start..end-1 hold ranks start+1..end; their mean is (start + 1 + end) / 2
+            var rank = 0.5 * (start + 1 + end);
+            for (var j = start; j < end; j++)
+            {
+                ranks[order[j]] = rank;
+            }
+
+            start = end;
+        }
+    }
+}

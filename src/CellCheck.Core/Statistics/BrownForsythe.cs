@@ -3,7 +3,7 @@ namespace CellCheck.Core.Statistics;
 /// <summary>
 /// The Brown-Forsythe test for equal variances (Brown &amp; Forsythe 1974, "Robust tests for the equality of
 /// variances", JASA 69, 364-367): Levene's one-way ANOVA F computed on z = |y − median_g|, the absolute deviations
-/// from the group medians, referred to F(k − 1, N − k). Centring on the median makes the test robust to skewed data.
+/// from the group medians, referred to F(k − 1, N − k), an approximation as for Levene's test. Centring on the median makes the test robust to skewed data.
 /// </summary>
 /// <remarks>
 /// Only groups with at least two values take part; k and N count those groups and their values. Not testable when

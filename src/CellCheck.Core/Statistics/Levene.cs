@@ -3,7 +3,8 @@ namespace CellCheck.Core.Statistics;
 /// <summary>
 /// Levene's test for equal variances (Levene 1960, "Robust tests for equality of variances", in Olkin (ed.),
 /// Contributions to Probability and Statistics, Stanford University Press, 278-292): the one-way ANOVA F statistic
-/// computed on z = |y − ȳ_g|, the absolute deviations from the group means, referred to F(k − 1, N − k).
+/// computed on z = |y − ȳ_g|, the absolute deviations from the group means, referred to F(k − 1, N − k). The F reference distribution is an approximation: the deviations are
+/// neither normal nor independent within a group, and the test is valid only asymptotically.
 /// </summary>
 /// <remarks>
 /// Only groups with at least two values take part; k and N count those groups and their values. A group of one

@@ -8,7 +8,8 @@ namespace CellCheck.Core.Statistics;
 /// <remarks>
 /// Numerics follow the advice of Simon &amp; Lesage (1989, Comput. Stat. Data Anal. 8, 325-332) for data with many
 /// constant leading digits: each group mean is a shifted sum (<see cref="Descriptive.Mean"/>), within-group sums of
-/// squares use the corrected two-pass formula of Chan, Golub &amp; LeVeque (1983), and the grand mean is formed from
+/// squares use the corrected two-pass formula of Chan, Golub &amp; LeVeque (1983) with the squares summed by
+/// Neumaier's (1974) compensated summation, and the grand mean is formed from
 /// the group means about the first group mean, with the same correction applied to the between-group sum of squares.
 /// This reproduces the certified values of the NIST StRD one-way ANOVA data sets. Empty groups are ignored and do
 /// not count in the degrees of freedom; a group of one value counts in the between-group degrees of freedom.

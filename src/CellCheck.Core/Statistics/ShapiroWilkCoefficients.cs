@@ -1,0 +1,91 @@
+namespace CellCheck.Core.Statistics;
+
+/// <summary>
+/// The Shapiro-Wilk weights a by Royston's approximation (Royston 1992, Statistics and Computing 2, 117-119;
+/// Royston 1995, Applied Statistics 44, 547-551, algorithm AS R94). Only the upper half a_n, a_(n−1), … is kept:
+/// the vector is antisymmetric (a_(n+1−i) = −a_i) and, for odd n, its middle weight is zero.
+/// </summary>
+/// <remarks>
+/// Normal scores are approximated by Blom's m_i = Φ⁻¹((i − 3/8)/(n + 1/4)). The two outermost weights come from
+/// Royston's polynomials in u = n^(−1/2) added to m_i/√(m'm) (only a_n when n ≤ 5); the others are m_i/√φ, where φ
+/// makes the whole vector unit length. For n = 3 the exact value a_3 = √(1/2) is used. Vectors are cached per n
+/// up to 5000 (lock-free: two threads may compute the same vector, one copy wins, both are equal).
+/// </remarks>
+internal static class ShapiroWilkCoefficients
+{
+    /// <summary>Largest n whose vector is cached; also the upper limit of the p-value approximation.</summary>
+    internal const int CacheLimit = 5000;
+
+    // Royston (1992) polynomials in u = 1/√n for a_n and a_(n−1), lowest power first.
+    private static readonly double[] Last = [0.0, 0.221157, -0.147981, -2.071190, 4.434685, -2.706056];
+    private static readonly double[] NextToLast = [0.0, 0.042981, -0.293762, -1.752461, 5.682633, -3.582633];
+
+    private static readonly double[]?[] Cache = new double[]?[CacheLimit + 1];
+
+    /// <summary>The half vector for n ≥ 3 (shared, cached: callers must not modify it).</summary>
+    internal static double[] Shared(int n)
+    {
+        if (n > CacheLimit)
+        {
+            return Compute(n);
+        }
+
+        var cached = Volatile.Read(ref Cache[n]);
+        if (cached is not null)
+        {
+            return cached;
+        }
+
+        var fresh = Compute(n);
+        return Interlocked.CompareExchange(ref Cache[n], fresh, null) ?? fresh;
+    }
+
+    /// <summary>Computes the half vector a_n, a_(n−1), …, a_(n+1−⌊n/2⌋) for n ≥ 3.</summary>
+    internal static double[] Compute(int n)
+    {
+        ArgumentOutOfRangeException.ThrowIfLessThan(n, 3);
+        var half = n / 2;
+        var a = new double[half];
+        if (n == 3)
+        {
+            a[0] = Math.Sqrt(0.5);
+            return a;
+        }
+
+        // Upper-half Blom scores, largest first: m[i] = −Φ⁻¹((i + 1 − 3/8)/(n + 1/4)).
+        var m = new double[half];
+        var sumSquares = 0.0;
+        for (var i = 0; i < half; i++)
+        {
+            m[i] = -StandardNormal.Quantile((i + 1 - 0.375) / (n + 0.25));
+            sumSquares += m[i] * m[i];
+        }
+
+        sumSquares *= 2.0;
+        var norm = Math.Sqrt(sumSquares);
+        var u = 1.0 / Math.Sqrt(n);
+        a[0] = (m[0] / norm) + Polynomial.Evaluate(Last, u);
+        int first;
+        double phi;
+        if (n > 5)
+        {
+            a[1] = (m[1] / norm) + Polynomial.Evaluate(NextToLast, u);
+            phi = (sumSquares - (2.0 * m[0] * m[0]) - (2.0 * m[1] * m[1]))
+                / (1.0 - (2.0 * a[0] * a[0]) - (2.0 * a[1] * a[1]));
+            first = 2;
+        }
+        else
+        {
+            phi = (sumSquares - (2.0 * m[0] * m[0])) / (1.0 - (2.0 * a[0] * a[0]));
+            first = 1;
+        }
+
+        var scale = 1.0 / Math.Sqrt(phi);
+        for (var i = first; i < half; i++)
+        {
+            a[i] = m[i] * scale;
+        }
+
+        return a;
+    }
+}

@@ -22,7 +22,7 @@ internal static class CellChecks
             var cell = residuals.Residuals.AsSpan(starts[c], starts[c + 1] - starts[c]);
             sw[c] = ShapiroWilk.Test(cell);
             ad[c] = AndersonDarling.Test(cell);
-            moments[c] = Moments.Compute(partition.Values.Group(c));
+            moments[c] = Moments.Summarize(partition.Values.Group(c));
         }
 
         var swAdjusted = Adjust(sw, options.Adjust);

@@ -39,7 +39,7 @@ internal static class PooledChecks
                 + "Judge by Anderson-Darling, D'Agostino-Pearson and the size of skewness and kurtosis.");
         }
 
-        var moments = Moments.Compute(span);
+        var moments = Moments.Summarize(span);
         CheckResult[] checks =
         [
             CheckResults.From(CheckNames.ShapiroWilk, ShapiroWilk.Test(span), alpha),

@@ -87,7 +87,7 @@ public static class DesignReader
         return cut < 0 ? message : message[..cut];
     }
 
-    internal static AdjustMethod? ParseAdjust(string text) => text switch
+    public static AdjustMethod? ParseAdjust(string text) => text switch
     {
         "holm" => AdjustMethod.Holm,
         "bh" or "benjamini-hochberg" => AdjustMethod.BenjaminiHochberg,

@@ -16,7 +16,7 @@ internal static class CellTable
 
         foreach (var h in new[] { "n", "mean", "sd", "W", "p", "p adj" })
         {
-            table.AddColumn(new TableColumn(h).RightAlignment());
+            table.AddColumn(new TableColumn(h).RightAligned());
         }
 
         table.AddColumn(new TableColumn("status"));

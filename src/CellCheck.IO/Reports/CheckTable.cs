@@ -10,9 +10,9 @@ internal static class CheckTable
     {
         var table = new Table().Border(TableBorder.Simple).Title(Markup.Escape(title));
         table.AddColumn("check");
-        table.AddColumn(new TableColumn("statistic").RightAlignment());
-        table.AddColumn(new TableColumn("df").RightAlignment());
-        table.AddColumn(new TableColumn("p").RightAlignment());
+        table.AddColumn(new TableColumn("statistic").RightAligned());
+        table.AddColumn(new TableColumn("df").RightAligned());
+        table.AddColumn(new TableColumn("p").RightAligned());
         table.AddColumn("status");
         foreach (var k in checks)
         {

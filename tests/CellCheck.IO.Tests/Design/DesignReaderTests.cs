@@ -1,4 +1,3 @@
-using CellCheck.IO;
 using CellCheck.IO.Design;
 
 namespace CellCheck.IO.Tests.Design;

@@ -6,7 +6,8 @@ namespace CellCheck.Core.Statistics;
 /// the vector is antisymmetric (a_(n+1−i) = −a_i) and, for odd n, its middle weight is zero.
 /// </summary>
 /// <remarks>
-/// Normal scores are approximated by Blom's m_i = Φ⁻¹((i − 3/8)/(n + 1/4)). The two outermost weights come from
+/// Normal scores are approximated by Blom's (1958) m_i = Φ⁻¹((i − 3/8)/(n + 1/4)), with Φ⁻¹ evaluated through
+/// MathNet.Numerics' inverse complementary error function (rational approximations to double precision). The two outermost weights come from
 /// Royston's polynomials in u = n^(−1/2) added to m_i/√(m'm) (only a_n when n ≤ 5); the others are m_i/√φ, where φ
 /// makes the whole vector unit length. For n = 3 the exact value a_3 = √(1/2) is used. Vectors are cached per n
 /// up to 5000 (lock-free: two threads may compute the same vector, one copy wins, both are equal).

@@ -202,6 +202,23 @@ public sealed class ShapiroWilkTests
     }
 
     [Fact]
+    public void Shapiro_wilk_coefficient_cache_gives_the_same_vectors_under_parallel_use()
+    {
+        // the cache is lock-free: racing threads may compute a vector twice, but every caller must see equal values
+        var mismatches = 0;
+        Parallel.For(0, 2000, i =>
+        {
+            var n = 3 + (i % 200);
+            if (!ShapiroWilk.Coefficients(n).SequenceEqual(ShapiroWilkCoefficients.Compute(n)))
+            {
+                Interlocked.Increment(ref mismatches);
+            }
+        });
+
+        Assert.Equal(0, mismatches);
+    }
+
+    [Fact]
     public void Shapiro_wilk_exact_n3_p_value_is_one_at_w_one_and_zero_at_three_quarters()
     {
         // Shapiro & Wilk (1965): for n = 3, W ranges over [3/4, 1] with p = (6/π)(asin √W − π/3)

@@ -19,7 +19,7 @@ internal static class CellChecks
         var starts = partition.Values.Starts;
         for (var c = 0; c < count; c++)
         {
-            var cell = residuals.Residuals.AsSpan(starts[c], starts[c + 1] - starts[c]);
+            var cell = residuals.WithinCellShift ? partition.Values.Group(c) : residuals.Residuals.AsSpan(starts[c], starts[c + 1] - starts[c]);
             sw[c] = ShapiroWilk.Test(cell);
             ad[c] = AndersonDarling.Test(cell);
             moments[c] = Moments.Summarize(partition.Values.Group(c));

@@ -12,7 +12,9 @@ internal static class SpreadChecks
 {
     public static SpreadResult Run(CellPartition partition, ResidualSet residuals, IReadOnlyList<CellResult> cells, double alpha)
     {
-        var grouped = new GroupedValues(residuals.Residuals, partition.Values.Starts);
+        // Every spread test is invariant to a shift within each cell; with cell-means residuals use the values
+        // themselves so that ties in the data stay exact ties for Fligner-Killeen's ranks.
+        var grouped = residuals.WithinCellShift ? partition.Values : new GroupedValues(residuals.Residuals, partition.Values.Starts);
         var used = 0;
         int? largest = null;
         int? smallest = null;

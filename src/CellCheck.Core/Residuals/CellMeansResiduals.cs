@@ -46,6 +46,6 @@ public sealed class CellMeansResiduals : IResidualSource
             }
         }
 
-        return new ResidualSet(Name, residuals, fitted, studentized, s, df);
+        return new ResidualSet(Name, residuals, fitted, studentized, s, df, WithinCellShift: true);
     }
 }

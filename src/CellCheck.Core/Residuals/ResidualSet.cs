@@ -4,5 +4,9 @@ namespace CellCheck.Core.Residuals;
 /// Residuals of a fitted model in the grouped (cell) order of a <see cref="Cells.CellPartition"/>, with fitted
 /// values (relative to the response origin), internally studentized residuals (NaN where leverage is 1, e.g. a
 /// singleton cell), the pooled residual standard deviation and its degrees of freedom.
+/// <see cref="WithinCellShift"/> is true when every residual is its value minus one constant per cell (the
+/// cell-means model): then checks that are invariant to a shift within each cell run on the values themselves,
+/// so exact ties in the data stay exact (rank-based tests depend on them).
 /// </summary>
-public sealed record ResidualSet(string Model, double[] Residuals, double[] Fitted, double[] Studentized, double ResidualSd, int ResidualDf);
+public sealed record ResidualSet(string Model, double[] Residuals, double[] Fitted, double[] Studentized, double ResidualSd, int ResidualDf,
+    bool WithinCellShift = false);

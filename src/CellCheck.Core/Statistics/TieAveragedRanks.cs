@@ -3,9 +3,10 @@ namespace CellCheck.Core.Statistics;
 /// <summary>Ranks 1..n of a sample, tied values sharing the mean of the ranks they occupy (mid-ranks).</summary>
 internal static class TieAveragedRanks
 {
-    /// <summary>Writes the mid-rank of each <paramref name="x"/>[i] into <paramref name="ranks"/>[i]. Values are
-    /// tied only when exactly equal. NaN values are not allowed.</summary>
-    public static void Compute(ReadOnlySpan<double> x, Span<double> ranks)
+    /// <summary>Writes the mid-rank of each <paramref name="x"/>[i] into <paramref name="ranks"/>[i]. Values within
+    /// <paramref name="tolerance"/> of the smallest value of a run of sorted values are tied (0: exact equality only).
+    /// NaN values are not allowed.</summary>
+    public static void Compute(ReadOnlySpan<double> x, Span<double> ranks, double tolerance = 0.0)
     {
         var n = x.Length;
         var keys = x.ToArray();
@@ -20,7 +21,7 @@ internal static class TieAveragedRanks
         while (start < n)
         {
             var end = start + 1;
-            while (end < n && keys[end] == keys[start])
+            while (end < n && keys[end] - keys[start] <= tolerance)
             {
                 end++;
             }

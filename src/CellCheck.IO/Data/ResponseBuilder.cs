@@ -44,7 +44,15 @@ internal sealed class ResponseBuilder(string name, string? unit, int capacity)
             return;
         }
 
-        Exclude(line, "not-a-number", $"not a number: '{Clip(text)}'");
+        Exclude(line, NonFinite(text) ? "not-finite" : "not-a-number",
+            (NonFinite(text) ? "not a finite number" : "not a number") + $": '{Clip(text)}'");
+    }
+
+    private static bool NonFinite(ReadOnlySpan<char> text)
+    {
+        var t = text.TrimStart("+-");
+        return t.Equals("nan", StringComparison.OrdinalIgnoreCase) || t.Equals("inf", StringComparison.OrdinalIgnoreCase)
+            || t.Equals("infinity", StringComparison.OrdinalIgnoreCase);
     }
 
     /// <summary>Marks a row excluded for a reason found elsewhere (a missing factor value).</summary>

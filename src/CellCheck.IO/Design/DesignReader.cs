@@ -77,8 +77,35 @@ public static class DesignReader
                 duplicate ? "A key is written twice." : "The YAML cannot be read: " + FirstLine(ex.Message),
                 duplicate ? "Keep one of the two entries." : "Check indentation (spaces, not tabs), colons and brackets near this place."));
         }
+        catch (InvalidOperationException)
+        {
+            // The YAML scanner can fail without a YamlException on some broken flow collections; locate the
+            // failure at the end of the last event it did parse.
+            var mark = LastParsedMark(text);
+            return LoadResult<DesignFile>.Failure(new Problem(ProblemCodes.YamlSyntax, path, mark.Line, mark.Column,
+                "The YAML cannot be read after this place.", "Check for an unclosed bracket or quote, and indentation (spaces, not tabs)."));
+        }
 
         return new DesignValidator(path, root, Keys).Validate();
+    }
+
+    private static SourceMark LastParsedMark(string text)
+    {
+        var parser = new Parser(new StringReader(text));
+        var mark = new SourceMark(1, 1);
+        try
+        {
+            while (parser.MoveNext())
+            {
+                mark = new SourceMark((int)parser.Current!.End.Line, (int)parser.Current.End.Column);
+            }
+        }
+        catch (Exception ex) when (ex is YamlException or InvalidOperationException)
+        {
+            // The mark of the last event parsed is the best location there is.
+        }
+
+        return mark;
     }
 
     private static string FirstLine(string message)

@@ -59,7 +59,7 @@ public sealed class DesignReaderTests
     {
         var r = Parse("data: t.csv\nfactors: [a, b, a]\nresponses: [y]\n");
         var p = Assert.Single(r.Problems);
-        Assert.Equal((ProblemCodes.DuplicateName, 2, 16), (p.Code, p.Line, p.Column));
+        Assert.Equal((ProblemCodes.DuplicateName, 2, 17), (p.Code, p.Line, p.Column));
     }
 
     [Fact]
@@ -92,7 +92,7 @@ public sealed class DesignReaderTests
     public void A_bad_factor_kind_and_a_bad_adjustment_are_both_reported()
     {
         var r = Parse("data: t.csv\nfactors:\n  - column: a\n    kind: ordinal\nresponses: [y]\nadjust: bonferroni\n");
-        Assert.Equal([ProblemCodes.BadKind, ProblemCodes.BadAdjust], r.Problems.Select(p => p.Code).Order(StringComparer.Ordinal));
+        Assert.Equal([ProblemCodes.BadAdjust, ProblemCodes.BadKind], r.Problems.Select(p => p.Code).Order(StringComparer.Ordinal));
     }
 
     [Fact]

@@ -35,6 +35,11 @@ internal static class VerdictWriter
             findings.Add(text + ".");
         }
 
+        if (spread.Status == CheckStatus.Flag && pooled.Status == CheckStatus.Flag)
+        {
+            findings.Add("Unequal spread alone makes pooled residuals look heavy-tailed; settle the spread question before judging pooled normality.");
+        }
+
         var anyFlag = flagged || pooled.Status == CheckStatus.Flag || spread.Status == CheckStatus.Flag;
         if (!anyFlag)
         {
@@ -91,7 +96,7 @@ internal static class VerdictWriter
             .Select(c => c.Check + (adjusted && c.PAdjusted is not null ? " adjusted p " + NumberText.P(c.PAdjusted.Value) : " p " + NumberText.P(c.P ?? double.NaN))));
 
     private static string ReplicateText(Census census) => census.MinReplicates == census.MaxReplicates
-        ? NumberText.Count(census.MinReplicates) + " value(s)"
+        ? NumberText.Count(census.MinReplicates) + (census.MinReplicates == 1 ? " value" : " values")
         : NumberText.Count(census.MinReplicates) + " to " + NumberText.Count(census.MaxReplicates) + " values";
 
     /// <summary>Plain words for a reason code.</summary>

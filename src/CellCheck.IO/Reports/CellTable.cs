@@ -8,7 +8,8 @@ internal static class CellTable
 {
     public static void Write(IAnsiConsole console, ResponseReport r, IReadOnlyList<string> factors)
     {
-        var table = new Table().Border(TableBorder.Simple).Title("Cells: normality within each cell (Shapiro-Wilk on residuals)");
+        console.Write(new Text("Cells: normality within each cell (Shapiro-Wilk on residuals)" + "\n"));
+        var table = new Table().Border(TableBorder.Minimal);
         foreach (var f in factors)
         {
             table.AddColumn(new TableColumn(Markup.Escape(f)));

@@ -8,7 +8,8 @@ internal static class CheckTable
 {
     public static void Write(IAnsiConsole console, string title, IReadOnlyList<CheckResult> checks)
     {
-        var table = new Table().Border(TableBorder.Simple).Title(Markup.Escape(title));
+        console.Write(new Text(title + "\n"));
+        var table = new Table().Border(TableBorder.Minimal);
         table.AddColumn("check");
         table.AddColumn(new TableColumn("statistic").RightAligned());
         table.AddColumn(new TableColumn("df").RightAligned());

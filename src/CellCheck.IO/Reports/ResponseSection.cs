@@ -30,10 +30,8 @@ internal static class ResponseSection
 
         console.WriteLine();
         CellTable.Write(console, r, factors);
-        console.WriteLine();
         CheckTable.Write(console, "Pooled residuals (" + r.Pooled.Residuals + ", internally studentized, n = " + NumberText.Count(r.Pooled.N) + ")", r.Pooled.Checks);
         Notes(console, r.Pooled.Notes);
-        console.WriteLine();
         CheckTable.Write(console, "Spread across cells (" + NumberText.Count(r.Spread.CellsUsed) + " cells with 2 or more values)", r.Spread.Checks);
         if (r.Spread.SdRatio is { } ratio)
         {

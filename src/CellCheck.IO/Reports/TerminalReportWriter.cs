@@ -19,17 +19,19 @@ public static class TerminalReportWriter
     public static void Write(CheckReport report, TextWriter writer, string toolVersion, int width = 100, bool color = false)
     {
         ArgumentNullException.ThrowIfNull(report);
+        ArgumentNullException.ThrowIfNull(writer);
+        using var buffer = new StringWriter(System.Globalization.CultureInfo.InvariantCulture);
         var console = AnsiConsole.Create(new AnsiConsoleSettings
         {
             Ansi = color ? AnsiSupport.Yes : AnsiSupport.No,
             ColorSystem = color ? ColorSystemSupport.Standard : ColorSystemSupport.NoColors,
             Interactive = InteractionSupport.No,
-            Out = new AnsiConsoleOutput(writer),
+            Out = new AnsiConsoleOutput(buffer),
         });
         console.Profile.Width = width;
         var d = report.Design;
-        console.WriteLine($"cellcheck {toolVersion} | design {d.DesignFile} | data {d.DataFile}");
-        console.WriteLine($"alpha {NumberText.Value(d.Alpha)} | within-cell p adjusted across cells: {d.Adjust} | factors: {string.Join(", ", d.Factors)}");
+        console.Write(new Text($"cellcheck {toolVersion} | design {d.DesignFile} | data {d.DataFile}\n"));
+        console.Write(new Text($"alpha {NumberText.Value(d.Alpha)} | within-cell p adjusted across cells: {d.Adjust} | factors: {string.Join(", ", d.Factors)}\n"));
         foreach (var response in report.Responses)
         {
             console.WriteLine();
@@ -38,6 +40,11 @@ public static class TerminalReportWriter
 
         console.WriteLine();
         console.Write(new Text(CheckReport.Caution + "\n"));
+        foreach (var line in buffer.ToString().TrimEnd().Split('\n'))
+        {
+            writer.Write(line.TrimEnd());
+            writer.Write('\n');
+        }
     }
 
     internal static IRenderable Plain(string text) => new Text(text);

@@ -91,4 +91,26 @@ public sealed class SizeRuleTests
         Assert.Equal(Math.Min(1, Math.Max(2 * lo.P!.Value, hi.P!.Value)), hi.PAdjusted!.Value, 1e-15);
         Assert.Null(Check(r.Cells[2].Checks, CheckNames.ShapiroWilk).PAdjusted);
     }
+
+    [Fact]
+    public void Above_five_thousand_pooled_residuals_shapiro_wilk_keeps_w_without_p_and_says_why()
+    {
+        // Royston's approximation is valid for n <= 5000 (Royston 1995, AS R94); never subsample silently.
+        const int n = 6000;
+        var cells = new int[n];
+        var values = new double[n];
+        for (var i = 0; i < n; i++)
+        {
+            cells[i] = i % 3;
+            values[i] = Math.Sin(i * 0.7) + (0.001 * (i % 17));
+        }
+
+        var r = Analyze(cells, values, 3);
+        var sw = Check(r.Pooled.Checks, CheckNames.ShapiroWilk);
+        Assert.Equal((CheckStatus.NotTestable, NotTestableReason.TooManyValues), (sw.Status, sw.Reason));
+        Assert.NotNull(sw.Statistic);
+        Assert.Null(sw.P);
+        Assert.Contains(r.Pooled.Notes, note => note.Contains("5000", StringComparison.Ordinal));
+        Assert.NotEqual(CheckStatus.NotTestable, Check(r.Pooled.Checks, CheckNames.AndersonDarling).Status);
+    }
 }

@@ -1,6 +1,13 @@
+using CellCheck.Core.Calibration;
 using CellCheck.Core.Statistics;
 
 namespace CellCheck.Core.Analysis;
 
-/// <summary>Significance level and the multiplicity adjustment applied to within-cell p-values across the cells of a response.</summary>
-public sealed record AnalysisOptions(double Alpha = 0.05, AdjustMethod Adjust = AdjustMethod.Holm);
+/// <summary>
+/// Significance level, the multiplicity adjustment of within-cell p-values across the cells of a response, and how
+/// much simulation calibrates the primary checks.
+/// </summary>
+public sealed record AnalysisOptions(double Alpha = 0.05, AdjustMethod Adjust = AdjustMethod.Holm, CalibrationSettings? Calibration = null)
+{
+    public CalibrationSettings Simulation => Calibration ?? CalibrationSettings.Default;
+}

@@ -8,6 +8,7 @@ public static class CheckNames
     public const string DagostinoPearson = "dagostino-pearson";
     public const string Levene = "levene";
     public const string BrownForsythe = "brown-forsythe";
+    public const string BrownForsytheZerosRemoved = "brown-forsythe-zeros-removed";
     public const string Bartlett = "bartlett";
     public const string FlignerKilleen = "fligner-killeen";
 }

@@ -1,3 +1,4 @@
+using CellCheck.Core.Calibration;
 using CellCheck.Core.Cells;
 using CellCheck.Core.Data;
 using CellCheck.Core.Residuals;
@@ -20,7 +21,10 @@ public static class ResponseAnalyzer
         var cells = CellChecks.Run(partition, residuals, column.Origin, options);
         var pooled = PooledChecks.Run(residuals, options.Alpha);
         var spread = SpreadChecks.Run(partition, residuals, cells, options.Alpha);
-        var verdict = VerdictWriter.Write(census, cells, pooled, spread, partition.Factors, options);
+        var shape = new DesignShape(Enumerable.Range(0, partition.CellCount).Select(partition.Size));
+        var calibration = Calibrator.Calibrate(shape, options.Alpha, options.Simulation);
+        var assumptions = PrimaryDecisions.Decide(partition, pooled, spread, calibration, options.Alpha);
+        var verdict = VerdictWriter.Write(new VerdictInputs(census, cells, pooled, spread, partition.Factors, assumptions, calibration.Operating), options);
         return new ResponseReport(column.Name, column.Unit, partition.Values.Count, data.Excluded[response], census, cells, pooled, spread, verdict);
     }
 }

@@ -48,6 +48,7 @@ internal static class SpreadChecks
         [
             CheckResults.From(CheckNames.Levene, Levene.Test(grouped), alpha),
             CheckResults.From(CheckNames.BrownForsythe, BrownForsythe.Test(grouped), alpha),
+            CheckResults.From(CheckNames.BrownForsytheZerosRemoved, BrownForsytheZerosRemoved.Test(grouped), alpha),
             CheckResults.From(CheckNames.Bartlett, Bartlett.Test(grouped), alpha),
             CheckResults.From(CheckNames.FlignerKilleen, FlignerKilleen.Test(grouped), alpha),
         ];

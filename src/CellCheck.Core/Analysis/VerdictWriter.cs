@@ -1,115 +1,92 @@
-using CellCheck.Core.Cells;
-using CellCheck.Core.Data;
-using CellCheck.Core.Statistics;
-
 namespace CellCheck.Core.Analysis;
 
 /// <summary>
-/// Writes the verdict of one response in plain language: which assumption is in doubt, where and how strongly,
-/// what could not be judged, and a reminder of what the checks cannot see.
+/// Writes the verdict of one response in plain language: which assumption is in doubt (by its primary check),
+/// where and how strongly, what the supporting tests add, what could not be judged, and what the checks cannot see.
 /// </summary>
 internal static class VerdictWriter
 {
-    private const int CellsNamed = 3;
-
-    public static Verdict Write(Census census, IReadOnlyList<CellResult> cells, PooledResult pooled, SpreadResult spread,
-        IReadOnlyList<FactorColumn> factors, AnalysisOptions options)
+    public static Verdict Write(VerdictInputs x, AnalysisOptions options)
     {
         var findings = new List<string>();
-        var flagged = CellFindings(cells, factors, findings);
-        if (pooled.Status == CheckStatus.Flag)
+        var normality = x.Assumptions.Single(a => a.Assumption == AssumptionNames.Normality);
+        var spread = x.Assumptions.Single(a => a.Assumption == AssumptionNames.EqualSpread);
+        if (normality.Status == CheckStatus.Flag)
         {
-            findings.Add("Pooled residuals depart from normality (" + FlaggedTests(pooled.Checks) + "; skewness "
-                + NumberText.Fixed(pooled.Skewness, 2) + ", excess kurtosis " + NumberText.Fixed(pooled.ExcessKurtosis, 2) + ").");
+            findings.Add("Residuals are not normal: " + Primary(normality) + " on the pooled studentized residuals (skewness "
+                + NumberText.Fixed(x.Pooled.Skewness, 2) + ", excess kurtosis " + NumberText.Fixed(x.Pooled.ExcessKurtosis, 2) + ")."
+                + SupportingText.CellsThatStandOut(x));
         }
 
         if (spread.Status == CheckStatus.Flag)
         {
-            var text = "Spread differs across cells (" + FlaggedTests(spread.Checks) + ")";
-            if (spread.SdRatio is { } ratio && spread.LargestSdCell is { } hi && spread.SmallestSdCell is { } lo)
-            {
-                text += "; the largest cell SD is " + NumberText.Fixed(ratio, 1) + " times the smallest (" + CellText.Describe(cells[hi].Levels, factors)
-                    + " against " + CellText.Describe(cells[lo].Levels, factors) + ")";
-            }
-
-            findings.Add(text + ".");
+            findings.Add("Spread differs across cells: " + Primary(spread) + SupportingText.SdRatio(x) + ".");
         }
 
-        if (spread.Status == CheckStatus.Flag && pooled.Status == CheckStatus.Flag)
+        if (normality.Status == CheckStatus.Flag && spread.Status == CheckStatus.Flag)
         {
-            findings.Add("Unequal spread alone makes pooled residuals look heavy-tailed; settle the spread question before judging pooled normality.");
+            findings.Add("Unequal spread alone makes pooled residuals look heavy-tailed; settle the spread question before judging normality.");
         }
 
-        var anyFlag = flagged || pooled.Status == CheckStatus.Flag || spread.Status == CheckStatus.Flag;
-        if (!anyFlag)
+        var judged = x.Assumptions.Where(a => a.Status != CheckStatus.NotTestable).ToList();
+        var anyFlag = judged.Any(a => a.Status == CheckStatus.Flag);
+        if (!anyFlag && judged.Count > 0)
         {
-            findings.Add("No check raised doubt at alpha " + NumberText.Value(options.Alpha) + ". With " + ReplicateText(census)
+            findings.Add("No assumption is flagged at alpha " + NumberText.Value(options.Alpha) + " (Holm across "
+                + string.Join(" and ", judged.Select(a => a.Assumption)) + "). With " + ReplicateText(x.Census)
                 + " per cell, moderate departures can go unseen: absence of evidence is not proof that the assumptions hold.");
         }
 
-        NotTestableFindings(cells, spread, findings);
-        if (census.Singletons > 0 || census.EmptyCount > 0)
-        {
-            findings.Add("The design is incomplete: " + NumberText.Count(census.EmptyCount) + " empty combination(s) and "
-                + NumberText.Count(census.Singletons) + " singleton cell(s).");
-        }
-
-        var status = anyFlag ? CheckStatus.Flag : pooled.Status == CheckStatus.NotTestable && spread.Status == CheckStatus.NotTestable
-            && cells.All(c => c.Status == CheckStatus.NotTestable) ? CheckStatus.NotTestable : CheckStatus.Pass;
-        return new Verdict(status, findings);
+        SupportingText.Add(x, normality, spread, findings);
+        NotJudged(x, normality, spread, findings);
+        var status = anyFlag ? CheckStatus.Flag : judged.Count == 0 ? CheckStatus.NotTestable : CheckStatus.Pass;
+        return new Verdict(status, findings, x.Assumptions, x.Operating);
     }
 
-    private static bool CellFindings(IReadOnlyList<CellResult> cells, IReadOnlyList<FactorColumn> factors, List<string> findings)
-    {
-        var flagged = cells.Select((c, i) => (c, i)).Where(t => t.c.Status == CheckStatus.Flag)
-            .OrderBy(t => t.c.Checks.Min(k => k.PAdjusted ?? 1.0)).ToList();
-        if (flagged.Count == 0)
-        {
-            return false;
-        }
+    private static string Primary(AssumptionVerdict a) =>
+        a.Check + " p " + NumberText.P(a.P ?? double.NaN) + ", Holm-adjusted " + NumberText.P(a.PAdjusted ?? double.NaN);
 
-        var testable = cells.Count(c => c.Status != CheckStatus.NotTestable);
-        var named = string.Join("; ", flagged.Take(CellsNamed).Select(t => CellText.Describe(t.c.Levels, factors) + " (" + FlaggedTests(t.c.Checks, adjusted: true) + ")"));
-        var more = flagged.Count > CellsNamed ? "; and " + NumberText.Count(flagged.Count - CellsNamed) + " more" : string.Empty;
-        findings.Add("Residuals are not normal within " + NumberText.Count(flagged.Count) + " of " + NumberText.Count(testable)
-            + " testable cell(s): " + named + more + ".");
-        return true;
-    }
-
-    private static void NotTestableFindings(IReadOnlyList<CellResult> cells, SpreadResult spread, List<string> findings)
+    private static void NotJudged(VerdictInputs x, AssumptionVerdict normality, AssumptionVerdict spread, List<string> findings)
     {
-        var untested = cells.Where(c => c.Checks[0].Status == CheckStatus.NotTestable).GroupBy(c => c.Checks[0].Reason)
-            .Select(g => NumberText.Count(g.Count()) + " " + ReasonText(g.Key)).ToList();
-        if (untested.Count > 0)
+        if (normality.Status == CheckStatus.NotTestable)
         {
-            findings.Add("Within-cell normality could not be judged in " + string.Join(", ", untested) + ".");
+            findings.Add("Normality could not be judged: " + ReasonText(normality.Reason) + ".");
         }
 
         if (spread.Status == CheckStatus.NotTestable)
         {
-            findings.Add("Equal spread could not be judged: " + ReasonText(spread.Checks[0].Reason) + ".");
+            findings.Add("Equal spread could not be judged: " + ReasonText(spread.Reason) + ".");
+        }
+
+        var untested = x.Cells.Where(c => c.Checks[0].Status == CheckStatus.NotTestable).GroupBy(c => c.Checks[0].Reason)
+            .Select(g => NumberText.Count(g.Count()) + " " + ReasonText(g.Key)).ToList();
+        if (untested.Count > 0)
+        {
+            findings.Add("Within-cell normality could not be tested in " + string.Join(", ", untested) + ".");
+        }
+
+        if (x.Census.Singletons > 0 || x.Census.EmptyCount > 0)
+        {
+            findings.Add("The design is incomplete: " + NumberText.Count(x.Census.EmptyCount) + " empty combination(s) and "
+                + NumberText.Count(x.Census.Singletons) + " singleton cell(s), which carry no information about residuals.");
         }
     }
 
-    private static string FlaggedTests(IEnumerable<CheckResult> checks, bool adjusted = false) =>
-        string.Join(", ", checks.Where(c => c.Status == CheckStatus.Flag)
-            .Select(c => c.Check + (adjusted && c.PAdjusted is not null ? " adjusted p " + NumberText.P(c.PAdjusted.Value) : " p " + NumberText.P(c.P ?? double.NaN))));
-
-    private static string ReplicateText(Census census) => census.MinReplicates == census.MaxReplicates
+    private static string ReplicateText(Cells.Census census) => census.MinReplicates == census.MaxReplicates
         ? NumberText.Count(census.MinReplicates) + (census.MinReplicates == 1 ? " value" : " values")
         : NumberText.Count(census.MinReplicates) + " to " + NumberText.Count(census.MaxReplicates) + " values";
 
     /// <summary>Plain words for a reason code.</summary>
     public static string ReasonText(string? reason) => reason switch
     {
-        NotTestableReason.TooFewValues => "cell(s) with fewer than 3 values",
-        NotTestableReason.ZeroSpread => "cell(s) whose values are all equal",
-        NotTestableReason.TooManyValues => "cell(s) above 5000 values",
-        NotTestableReason.TooFewGroups => "fewer than two cells have two or more values",
-        NotTestableReason.AllGroupsOfTwo => "every cell has exactly two values",
-        NotTestableReason.ZeroVarianceGroup => "a cell has zero variance",
-        NotTestableReason.DegenerateWithinGroups => "the deviations do not vary within cells",
-        NotTestableReason.NoResidualDegreesOfFreedom => "no residual degrees of freedom",
+        Statistics.NotTestableReason.TooFewValues => "cell(s) with fewer than 3 values",
+        Statistics.NotTestableReason.ZeroSpread => "cell(s) whose values are all equal",
+        Statistics.NotTestableReason.TooManyValues => "cell(s) above 5000 values",
+        Statistics.NotTestableReason.TooFewGroups => "fewer than two cells have two or more values",
+        Statistics.NotTestableReason.AllGroupsOfTwo => "every cell has exactly two values",
+        Statistics.NotTestableReason.ZeroVarianceGroup => "a cell has zero variance",
+        Statistics.NotTestableReason.DegenerateWithinGroups => "the deviations do not vary within cells",
+        Statistics.NotTestableReason.NoResidualDegreesOfFreedom => "no residual degrees of freedom",
         _ => reason ?? "unknown reason",
     };
 }

@@ -8,7 +8,7 @@ internal static class CellTable
 {
     public static void Write(IAnsiConsole console, ResponseReport r, IReadOnlyList<string> factors)
     {
-        console.Write(new Text("Cells: normality within each cell (Shapiro-Wilk on residuals)" + "\n"));
+        console.Write(new Text("Supporting: normality within each cell (Shapiro-Wilk; p adjusted across cells)" + "\n"));
         var table = new Table().Border(TableBorder.Minimal);
         foreach (var f in factors)
         {

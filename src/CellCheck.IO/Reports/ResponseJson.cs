@@ -52,14 +52,7 @@ internal static class ResponseJson
         w.WriteEndArray();
         WritePooled(w, r.Pooled);
         WriteSpread(w, r, factors);
-        w.WriteStartObject("independence");
-        w.WriteString("status", "not-assessed");
-        w.WriteString("note", CheckReport.IndependenceNote);
-        w.WriteEndObject();
-        w.WriteStartObject("verdict");
-        w.WriteString("status", StatusWords.Of(r.Verdict.Status));
-        JsonReportWriter.Strings(w, "findings", r.Verdict.Findings);
-        w.WriteEndObject();
+        VerdictJson.Write(w, r.Verdict);
         w.WriteEndObject();
     }
 

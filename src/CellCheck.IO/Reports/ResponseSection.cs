@@ -17,6 +17,8 @@ internal static class ResponseSection
         }
 
         console.WriteLine();
+        AssumptionTable.Write(console, r.Verdict);
+        console.WriteLine();
         var c = r.Census;
         var replicates = c.MinReplicates == c.MaxReplicates ? NumberText.Count(c.MinReplicates) : NumberText.Count(c.MinReplicates) + " to " + NumberText.Count(c.MaxReplicates);
         console.Write(new Text($"Census: {c.Cells} cells of {NumberText.Value(c.Combinations, 12)} combinations, {replicates} values per cell, "
@@ -30,16 +32,15 @@ internal static class ResponseSection
 
         console.WriteLine();
         CellTable.Write(console, r, factors);
-        CheckTable.Write(console, "Pooled residuals (" + r.Pooled.Residuals + ", internally studentized, n = " + NumberText.Count(r.Pooled.N) + ")", r.Pooled.Checks);
+        CheckTable.Write(console, "Supporting: pooled residuals (" + r.Pooled.Residuals + ", internally studentized, n = " + NumberText.Count(r.Pooled.N) + ", asymptotic p)", r.Pooled.Checks);
         Notes(console, r.Pooled.Notes);
-        CheckTable.Write(console, "Spread across cells (" + NumberText.Count(r.Spread.CellsUsed) + " cells with 2 or more values)", r.Spread.Checks);
+        CheckTable.Write(console, "Supporting: spread across cells (" + NumberText.Count(r.Spread.CellsUsed) + " cells with 2 or more values, asymptotic p)", r.Spread.Checks);
         if (r.Spread.SdRatio is { } ratio)
         {
             console.Write(new Text("Largest / smallest cell SD: " + NumberText.Fixed(ratio, 2) + "\n"));
         }
 
         Notes(console, r.Spread.Notes);
-        console.Write(new Text(CheckReport.IndependenceNote + "\n"));
         ExcludedRows(console, r);
     }
 

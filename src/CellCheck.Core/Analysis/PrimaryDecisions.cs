@@ -1,0 +1,72 @@
+using CellCheck.Core.Calibration;
+using CellCheck.Core.Cells;
+using CellCheck.Core.Statistics;
+
+namespace CellCheck.Core.Analysis;
+
+/// <summary>
+/// Decides each assumption by its primary check: normality and equal spread by the tests <see cref="PrimaryRules"/>
+/// chooses, with p-values from the simulated null distribution of this design shape (or asymptotic above the Monte
+/// Carlo limit), adjusted by Holm across the assumptions judged. Independence is not judged by this version.
+/// </summary>
+internal static class PrimaryDecisions
+{
+    public static List<AssumptionVerdict> Decide(CellPartition partition, PooledResult pooled, SpreadResult spread, ShapeCalibration calibration, double alpha)
+    {
+        var cells = GroupFilter.AtLeast(partition.Values, 2);
+        var choice = calibration.Choice;
+        var shape = calibration.Shape;
+        double normality = double.NaN, spreadStat = double.NaN, pNormality = double.NaN, pSpread = double.NaN;
+        if (shape.Sizes.Length > 0)
+        {
+            var evaluator = new PrimaryEvaluator(choice, shape.Count, shape.Sizes.Length, shape.Sizes[^1]);
+            (normality, spreadStat) = evaluator.Evaluate(cells);
+        }
+
+        var normalityCheck = choice.Normality == NormalityPrimary.ShapiroWilkPooled ? CheckNames.ShapiroWilk : CheckNames.AndersonDarling;
+        var spreadCheck = choice.Spread == SpreadPrimary.Bartlett ? CheckNames.Bartlett : CheckNames.BrownForsytheZerosRemoved;
+        if (calibration.MonteCarlo)
+        {
+            pNormality = calibration.NormalityNull!.PValue(normality);
+            pSpread = calibration.SpreadNull!.PValue(spreadStat);
+        }
+        else
+        {
+            pNormality = pooled.Checks.FirstOrDefault(c => c.Check == normalityCheck)?.P ?? double.NaN;
+            pSpread = spread.Checks.FirstOrDefault(c => c.Check == spreadCheck)?.P ?? double.NaN;
+            pNormality = double.IsNaN(normality) ? double.NaN : pNormality;
+            pSpread = double.IsNaN(spreadStat) ? double.NaN : pSpread;
+        }
+
+        var adjusted = FamilyDecision.Adjusted([pNormality, pSpread]);
+        var method = calibration.MonteCarlo
+            ? "simulated for this design (" + NumberText.Count(calibration.NormalityNull!.Draws) + " null draws)"
+            : "asymptotic (design above the simulation limit)";
+        var normalityStatistic = choice.Normality == NormalityPrimary.ShapiroWilkPooled ? 1.0 - normality : normality;
+        return
+        [
+            Verdict(AssumptionNames.Normality, choice.Normality == NormalityPrimary.None ? null : normalityCheck, normalityStatistic,
+                pNormality, adjusted[0], alpha, choice.NormalityReason, method,
+                choice.Normality == NormalityPrimary.None ? NotTestableReason.TooFewValues : NotTestableReason.ZeroSpread),
+            Verdict(AssumptionNames.EqualSpread, choice.Spread == SpreadPrimary.None ? null : spreadCheck, spreadStat,
+                pSpread, adjusted[1], alpha, choice.SpreadReason, method,
+                choice.Spread == SpreadPrimary.None ? NotTestableReason.TooFewGroups : SpreadReason(spread, spreadCheck)),
+            new AssumptionVerdict(AssumptionNames.Independence, null, null, null, null, CheckStatus.NotTestable, "not-assessed",
+                CheckReport.IndependenceNote, "none"),
+        ];
+    }
+
+    private static AssumptionVerdict Verdict(string name, string? check, double statistic, double p, double adjusted, double alpha,
+        string rule, string method, string reasonIfMissing)
+    {
+        if (check is null || double.IsNaN(p))
+        {
+            return new AssumptionVerdict(name, check, null, null, null, CheckStatus.NotTestable, reasonIfMissing, rule, method);
+        }
+
+        return new AssumptionVerdict(name, check, statistic, p, adjusted, StatusRules.FromP(adjusted, alpha), null, rule, method);
+    }
+
+    private static string SpreadReason(SpreadResult spread, string check) =>
+        spread.Checks.FirstOrDefault(c => c.Check == check)?.Reason ?? NotTestableReason.DegenerateWithinGroups;
+}

@@ -1,0 +1,41 @@
+namespace CellCheck.Core.Calibration;
+
+/// <summary>
+/// Chooses one primary test per assumption from the design's cell sizes. The other tests are reported as
+/// supporting evidence and do not drive the verdict. The reasons are written into every report.
+/// </summary>
+public static class PrimaryRules
+{
+    /// <summary>Shapiro-Wilk's p approximation holds up to this many values (Royston 1995, algorithm AS R94).</summary>
+    public const int ShapiroWilkLimit = 5000;
+
+    public static PrimaryChoice Choose(DesignShape shape)
+    {
+        ArgumentNullException.ThrowIfNull(shape);
+        var (normality, normalityReason) = shape.Count switch
+        {
+            < 3 => (NormalityPrimary.None, "fewer than three residuals in cells with two or more values: normality cannot be judged"),
+            <= ShapiroWilkLimit => (NormalityPrimary.ShapiroWilkPooled,
+                "Shapiro-Wilk on the pooled studentized residuals: among the common omnibus tests it has the best power over a wide "
+                + "range of alternatives (Razali & Wah 2011); one pooled test sees more than many small per-cell tests and adds no "
+                + "multiplicity; its p-value is calibrated by simulation for this design because residuals of one cell are not independent"),
+            _ => (NormalityPrimary.AndersonDarlingPooled,
+                "Anderson-Darling on the pooled studentized residuals: Shapiro-Wilk's p approximation holds only up to 5000 values "
+                + "(Royston 1995), and Anderson-Darling is the most powerful of the distance tests (Stephens 1974)"),
+        };
+
+        var replicated = shape.Sizes.Length;
+        var (spread, spreadReason) = replicated < 2
+            ? (SpreadPrimary.None, "fewer than two cells with two or more values: spread cannot be compared")
+            : shape.Sizes[^1] == 2
+                ? (SpreadPrimary.Bartlett,
+                    "Bartlett: every cell has two values, so tests on absolute deviations are degenerate; Bartlett's test is exact "
+                    + "enough under normal errors but oversensitive to non-normality, so read it together with the normality verdict")
+                : (SpreadPrimary.BrownForsytheZerosRemoved,
+                    "Brown-Forsythe with structural zeros removed: median-centred deviations keep the test valid under skewed errors "
+                    + "(Conover, Johnson & Johnson 1981), and removing the zero deviation that the median forces in each odd-sized cell "
+                    + "restores the power the median costs at small odd n (Hines & O'Hara Hines 2000); mean-centred Levene is liberal "
+                    + "with small cells and Bartlett is oversensitive to non-normality");
+        return new PrimaryChoice(normality, normalityReason, spread, spreadReason);
+    }
+}

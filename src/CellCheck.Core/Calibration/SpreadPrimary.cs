@@ -1,0 +1,14 @@
+namespace CellCheck.Core.Calibration;
+
+/// <summary>The test that decides the equal-spread assumption.</summary>
+public enum SpreadPrimary
+{
+    /// <summary>Fewer than two cells with two or more values.</summary>
+    None,
+
+    /// <summary>Brown-Forsythe with structural zeros removed (Hines &amp; O'Hara Hines 2000).</summary>
+    BrownForsytheZerosRemoved,
+
+    /// <summary>Bartlett's test, when every cell has exactly two values and deviation-based tests are degenerate.</summary>
+    Bartlett,
+}

@@ -1,0 +1,78 @@
+using CellCheck.Core.Statistics;
+
+namespace CellCheck.Core.Calibration;
+
+/// <summary>
+/// Runs the verdict over a grid of designs under clean data and the two stated departures, and compares its power
+/// with the best single candidate test at the same exact size. Used by the calibration command; seeded, so the
+/// table is the same on every run.
+/// </summary>
+public static class CalibrationGrid
+{
+    /// <summary>The standard grid: 4 to 24 cells, 2 to 20 values per cell, balanced and unbalanced.</summary>
+    public static IReadOnlyList<GridDesign> Standard()
+    {
+        var designs = new List<GridDesign>();
+        foreach (var cells in new[] { 4, 8, 12, 24 })
+        {
+            foreach (var n in new[] { 2, 3, 4, 5, 10, 20 })
+            {
+                designs.Add(GridDesign.Create(cells, n, balanced: true));
+                if (n > 2)
+                {
+                    designs.Add(GridDesign.Create(cells, n, balanced: false));
+                }
+            }
+        }
+
+        return designs;
+    }
+
+    public static GridRow Run(GridDesign design, double alpha, CalibrationSettings settings)
+    {
+        ArgumentNullException.ThrowIfNull(design);
+        ArgumentNullException.ThrowIfNull(settings);
+        var calibration = Calibrator.Calibrate(design.Shape, alpha, settings);
+        var operating = calibration.Operating!;
+        var nulls = Candidates(design.Shape, Departure.None, settings.Seed + 10, settings.NullDraws);
+        var nullDistributions = Enumerable.Range(0, CandidateTests.Names.Length).Select(t => new NullDistribution(nulls.Select(d => d[t]))).ToArray();
+        (string, RateEstimate) Best(Departure departure, int seed)
+        {
+            var draws = Candidates(design.Shape, departure, seed, settings.ScenarioDraws);
+            var best = (Name: "none", Rate: new RateEstimate(0, draws.Length));
+            for (var t = 0; t < CandidateTests.Names.Length; t++)
+            {
+                var hits = draws.Count(d => nullDistributions[t].PValue(d[t]) < alpha);
+                if (hits > best.Rate.Hits)
+                {
+                    best = (CandidateTests.Names[t], new RateEstimate(hits, draws.Length));
+                }
+            }
+
+            return best;
+        }
+
+        var (varianceTest, variance) = Best(Departure.VarianceRatio4, settings.Seed + 12);
+        var (lognormalTest, lognormal) = Best(Departure.Lognormal, settings.Seed + 13);
+        return new GridRow(design, calibration.Choice, operating.FalseAlarm, operating.VarianceRatio4, operating.Lognormal,
+            varianceTest, variance, lognormalTest, lognormal);
+    }
+
+    private static double[][] Candidates(DesignShape shape, Departure departure, int seed, int draws)
+    {
+        var starts = new int[shape.Sizes.Length + 1];
+        for (var c = 0; c < shape.Sizes.Length; c++)
+        {
+            starts[c + 1] = starts[c] + shape.Sizes[c];
+        }
+
+        var results = new double[draws][];
+        Parallel.For(0, draws, i =>
+        {
+            var values = new double[shape.Count];
+            DrawGenerator.Fill(shape, departure, seed, i, values);
+            results[i] = CandidateTests.Evaluate(new GroupedValues(values, starts));
+        });
+        return results;
+    }
+}

@@ -24,7 +24,12 @@ internal static class PrimaryDecisions
         }
 
         var normalityCheck = choice.Normality == NormalityPrimary.ShapiroWilkPooled ? CheckNames.ShapiroWilk : CheckNames.AndersonDarling;
-        var spreadCheck = choice.Spread == SpreadPrimary.Bartlett ? CheckNames.Bartlett : CheckNames.BrownForsytheZerosRemoved;
+        var spreadCheck = choice.Spread switch
+        {
+            SpreadPrimary.Bartlett => CheckNames.Bartlett,
+            SpreadPrimary.BrownForsythe => CheckNames.BrownForsythe,
+            _ => CheckNames.BrownForsytheZerosRemoved,
+        };
         if (calibration.MonteCarlo)
         {
             pNormality = calibration.NormalityNull!.PValue(normality);

@@ -35,27 +35,24 @@ public static class CalibrationGrid
         var calibration = Calibrator.Calibrate(design.Shape, alpha, settings);
         var operating = calibration.Operating!;
         var nulls = Candidates(design.Shape, Departure.None, settings.Seed + 10, settings.NullDraws);
-        var nullDistributions = Enumerable.Range(0, CandidateTests.Names.Length).Select(t => new NullDistribution(nulls.Select(d => d[t]))).ToArray();
-        (string, RateEstimate) Best(Departure departure, int seed)
+        var nullDistributions = Enumerable.Range(0, CandidateTests.Names.Count).Select(t => new NullDistribution(nulls.Select(d => d[t]))).ToArray();
+        RateEstimate[] Rates(Departure departure, int seed)
         {
             var draws = Candidates(design.Shape, departure, seed, settings.ScenarioDraws);
-            var best = (Name: "none", Rate: new RateEstimate(0, draws.Length));
-            for (var t = 0; t < CandidateTests.Names.Length; t++)
-            {
-                var hits = draws.Count(d => nullDistributions[t].PValue(d[t]) < alpha);
-                if (hits > best.Rate.Hits)
-                {
-                    best = (CandidateTests.Names[t], new RateEstimate(hits, draws.Length));
-                }
-            }
-
-            return best;
+            return Enumerable.Range(0, CandidateTests.Names.Count)
+                .Select(t => new RateEstimate(draws.Count(d => nullDistributions[t].PValue(d[t]) < alpha), draws.Length)).ToArray();
         }
 
-        var (varianceTest, variance) = Best(Departure.VarianceRatio4, settings.Seed + 12);
-        var (lognormalTest, lognormal) = Best(Departure.Lognormal, settings.Seed + 13);
+        var variance = Rates(Departure.VarianceRatio4, settings.Seed + 12);
+        var lognormal = Rates(Departure.Lognormal, settings.Seed + 13);
+        var heavy = Rates(Departure.HeavyTails, settings.Seed + 14);
+        var bestVariance = Array.IndexOf(variance, variance.MaxBy(r => r.Hits)!);
+        var bestLognormal = Array.IndexOf(lognormal, lognormal.MaxBy(r => r.Hits)!);
+        var heavyDraws = Calibrator.Simulate(design.Shape, calibration.Choice, Departure.HeavyTails, settings.Seed + 15, settings.ScenarioDraws);
+        var heavySpread = heavyDraws.Count(d => FamilyDecision.Adjusted([calibration.NormalityNull!.PValue(d.Normality), calibration.SpreadNull!.PValue(d.Spread)])[1] < alpha);
         return new GridRow(design, calibration.Choice, operating.FalseAlarm, operating.VarianceRatio4, operating.Lognormal,
-            varianceTest, variance, lognormalTest, lognormal);
+            CandidateTests.Names[bestVariance], variance[bestVariance], CandidateTests.Names[bestLognormal], lognormal[bestLognormal],
+            new RateEstimate(heavySpread, heavyDraws.Length), variance, lognormal, heavy);
     }
 
     private static double[][] Candidates(DesignShape shape, Departure departure, int seed, int draws)

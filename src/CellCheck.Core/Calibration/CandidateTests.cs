@@ -6,15 +6,16 @@ namespace CellCheck.Core.Calibration;
 /// Every single test the verdict could have used, as statistics oriented larger = more evidence, for the
 /// calibration grid's comparison with the best single test.
 /// </summary>
-internal static class CandidateTests
+public static class CandidateTests
 {
-    public static readonly string[] Names =
+    /// <summary>Names of the candidate tests, in the order of <see cref="Evaluate"/>.</summary>
+    public static IReadOnlyList<string> Names { get; } =
     [
         "shapiro-wilk (pooled)", "anderson-darling (pooled)", "dagostino-pearson (pooled)",
-        "levene", "brown-forsythe", "brown-forsythe-zeros-removed", "bartlett", "fligner-killeen",
+        "levene", "brown-forsythe", "brown-forsythe-zeros-removed", "bartlett", "fligner-killeen", "bartlett-kurtosis-adjusted",
     ];
 
-    public static double[] Evaluate(GroupedValues cells)
+    internal static double[] Evaluate(GroupedValues cells)
     {
         var residuals = new double[cells.Count];
         var ss = 0.0;
@@ -49,6 +50,7 @@ internal static class CandidateTests
             Stat(BrownForsytheZerosRemoved.Test(cells)),
             Stat(Bartlett.Test(cells)),
             Stat(FlignerKilleen.Test(cells)),
+            Stat(BartlettKurtosisAdjusted.Test(cells)),
         ];
     }
 

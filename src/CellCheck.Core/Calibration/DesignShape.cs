@@ -23,9 +23,6 @@ public sealed class DesignShape : IEquatable<DesignShape>
     /// <summary>Number of values in the cells with two or more values.</summary>
     public int Count => Sizes.Sum();
 
-    /// <summary>Index (into <see cref="Sizes"/>) of the cell that a simulated departure is applied to: one of median size.</summary>
-    public int DepartureCell => Sizes.Length / 2;
-
     public bool Equals(DesignShape? other) => other is not null && other.Key == Key;
 
     public override bool Equals(object? obj) => Equals(obj as DesignShape);

@@ -4,7 +4,8 @@ namespace CellCheck.Core.Calibration;
 
 /// <summary>
 /// Seeded simulated data for a <see cref="DesignShape"/>: standard normal errors cell by cell (Box-Muller on
-/// MathNet's xoshiro256** generator), with an optional departure in one cell. Draw i of a seed is the same whatever
+/// MathNet's xoshiro256** generator), with an optional departure in one cell (cell <c>draw mod k</c>, so that
+/// rates average over every cell). Draw i of a seed is the same whatever
 /// the order or thread in which draws are made.
 /// </summary>
 internal static class DrawGenerator
@@ -29,8 +30,28 @@ internal static class DrawGenerator
             return;
         }
 
+        if (departure == Departure.HeavyTails)
+        {
+            // t(5) = z / sqrt(chi2(5) / 5), standardised by its SD sqrt(5 / 3)
+            for (var i = 0; i < shape.Count; i++)
+            {
+                var chi2 = 0.0;
+                for (var d = 0; d < 5; d++)
+                {
+                    var z = Normal(random);
+                    chi2 += z * z;
+                }
+
+                values[i] = values[i] / Math.Sqrt(chi2 / 5.0) / Math.Sqrt(5.0 / 3.0);
+            }
+
+            return;
+        }
+
+        // the departing cell rotates over the cells with the draw index, so rates average over cells of every size
+        var cell = draw % shape.Sizes.Length;
         var start = 0;
-        for (var c = 0; c < shape.DepartureCell; c++)
+        for (var c = 0; c < cell; c++)
         {
             start += shape.Sizes[c];
         }
@@ -38,7 +59,7 @@ internal static class DrawGenerator
         var s2 = LognormalShape * LognormalShape;
         var mean = Math.Exp(s2 / 2);
         var sd = Math.Sqrt((Math.Exp(s2) - 1) * Math.Exp(s2));
-        for (var i = start; i < start + shape.Sizes[shape.DepartureCell]; i++)
+        for (var i = start; i < start + shape.Sizes[cell]; i++)
         {
             values[i] = departure == Departure.VarianceRatio4 ? 2.0 * values[i] : (Math.Exp(LognormalShape * values[i]) - mean) / sd;
         }

@@ -5,7 +5,7 @@ namespace CellCheck.Core.Calibration;
 /// <summary>
 /// Computes the two primary statistics of a set of cells, oriented so that larger means more evidence against the
 /// assumption: normality 1 − W (or A²) on the pooled internally studentized cell-means residuals, spread the
-/// Brown-Forsythe F with structural zeros removed (or Bartlett's K²). NaN when a statistic does not exist.
+/// Brown-Forsythe F (plain or with structural zeros removed) or Bartlett's K². NaN when a statistic does not exist.
 /// One instance per thread: it owns its scratch buffers.
 /// </summary>
 internal sealed class PrimaryEvaluator(PrimaryChoice choice, int capacity, int groups, int largest)
@@ -68,6 +68,7 @@ internal sealed class PrimaryEvaluator(PrimaryChoice choice, int capacity, int g
     public double Spread(GroupedValues cells) => choice.Spread switch
     {
         SpreadPrimary.BrownForsytheZerosRemoved => BrownForsytheZerosRemoved.Statistic(cells, _deviations, _starts, _scratch),
+        SpreadPrimary.BrownForsythe => BrownForsythe.Test(cells) is { IsTestable: true } f ? f.Statistic : double.NaN,
         SpreadPrimary.Bartlett => Bartlett.Test(cells) is { IsTestable: true } b ? b.Statistic : double.NaN,
         _ => double.NaN,
     };

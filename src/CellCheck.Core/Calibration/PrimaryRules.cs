@@ -25,17 +25,23 @@ public static class PrimaryRules
         };
 
         var replicated = shape.Sizes.Length;
+        var balancedOdd = replicated > 0 && shape.Sizes[0] == shape.Sizes[^1] && shape.Sizes[0] % 2 == 1;
         var (spread, spreadReason) = replicated < 2
             ? (SpreadPrimary.None, "fewer than two cells with two or more values: spread cannot be compared")
             : shape.Sizes[^1] == 2
                 ? (SpreadPrimary.Bartlett,
                     "Bartlett: every cell has two values, so tests on absolute deviations are degenerate; Bartlett's test is exact "
-                    + "enough under normal errors but oversensitive to non-normality, so read it together with the normality verdict")
-                : (SpreadPrimary.BrownForsytheZerosRemoved,
-                    "Brown-Forsythe with structural zeros removed: median-centred deviations keep the test valid under skewed errors "
-                    + "(Conover, Johnson & Johnson 1981), and removing the zero deviation that the median forces in each odd-sized cell "
-                    + "restores the power the median costs at small odd n (Hines & O'Hara Hines 2000); mean-centred Levene is liberal "
-                    + "with small cells and Bartlett is oversensitive to non-normality");
+                    + "under normal errors but oversensitive to non-normality, so read it together with the normality verdict")
+                : balancedOdd
+                    ? (SpreadPrimary.BrownForsytheZerosRemoved,
+                        "Brown-Forsythe with structural zeros removed: median-centred deviations keep the test valid under skewed errors "
+                        + "(Conover, Johnson & Johnson 1981); with every cell of the same odd size the median forces one zero deviation "
+                        + "per cell, and removing it (Hines & O'Hara Hines 2000) makes heavy tails pass for unequal spread far less often at small "
+                        + "n, for a point or two of power (docs/calibration.md)")
+                    : (SpreadPrimary.BrownForsythe,
+                        "Brown-Forsythe: median-centred deviations keep the test valid under skewed and heavy-tailed errors (Conover, "
+                        + "Johnson & Johnson 1981), where mean-centred Levene is liberal with small cells and Bartlett mistakes heavy "
+                        + "tails for unequal spread; its p-value is calibrated by simulation, which removes its conservatism at small n");
         return new PrimaryChoice(normality, normalityReason, spread, spreadReason);
     }
 }

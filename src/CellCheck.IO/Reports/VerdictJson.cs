@@ -45,8 +45,8 @@ internal static class VerdictJson
         w.WriteStartObject("operating");
         w.WriteNumber("alpha", o.Alpha);
         Rate(w, "false_alarm", "clean data: normal errors, equal spread", o.FalseAlarm);
-        Rate(w, "variance_ratio_4", "one cell of median size with four times the variance", o.VarianceRatio4);
-        Rate(w, "lognormal_cell", "one cell of median size with lognormal errors, shape 0.5", o.Lognormal);
+        Rate(w, "variance_ratio_4", "one cell (each in turn) with four times the variance", o.VarianceRatio4);
+        Rate(w, "lognormal_cell", "one cell (each in turn) with lognormal errors, shape 0.5", o.Lognormal);
         w.WriteEndObject();
     }
 

@@ -56,9 +56,11 @@ public sealed class CalibrationTests
 
     [Theory]
     [InlineData("2,2,2", NormalityPrimary.ShapiroWilkPooled, SpreadPrimary.Bartlett)]
-    [InlineData("2,3,3", NormalityPrimary.ShapiroWilkPooled, SpreadPrimary.BrownForsytheZerosRemoved)]
+    [InlineData("2,3,3", NormalityPrimary.ShapiroWilkPooled, SpreadPrimary.BrownForsythe)]
+    [InlineData("3,3,3", NormalityPrimary.ShapiroWilkPooled, SpreadPrimary.BrownForsytheZerosRemoved)]
+    [InlineData("4,4,4", NormalityPrimary.ShapiroWilkPooled, SpreadPrimary.BrownForsythe)]
     [InlineData("1,2", NormalityPrimary.None, SpreadPrimary.None)]
-    [InlineData("3000,3000", NormalityPrimary.AndersonDarlingPooled, SpreadPrimary.BrownForsytheZerosRemoved)]
+    [InlineData("3000,3000", NormalityPrimary.AndersonDarlingPooled, SpreadPrimary.BrownForsythe)]
     public void The_primary_checks_follow_the_cell_sizes(string sizes, NormalityPrimary normality, SpreadPrimary spread)
     {
         var choice = PrimaryRules.Choose(new DesignShape(sizes.Split(',').Select(int.Parse)));

@@ -11,7 +11,7 @@ internal static class CalibrateCommand
     public static Command Create(TextWriter output, TextWriter error)
     {
         var draws = new Option<int>("--draws") { Description = "Simulated data sets per design and scenario.", DefaultValueFactory = _ => 1000, HelpName = "N" };
-        var nullDraws = new Option<int>("--null-draws") { Description = "Null draws for the Monte Carlo p-values.", DefaultValueFactory = _ => 1999, HelpName = "N" };
+        var nullDraws = new Option<int>("--null-draws") { Description = "Null draws for the Monte Carlo p-values.", DefaultValueFactory = _ => 9999, HelpName = "N" };
         var alpha = new Option<double>("--alpha") { Description = "Significance level.", DefaultValueFactory = _ => 0.05, HelpName = "A" };
         var outFile = new Option<string?>("--out") { Description = "Write the Markdown table to FILE (default: print it).", HelpName = "FILE" };
         var command = new Command("calibrate", "Measure the verdict's false-alarm rate and power over a grid of designs (a benchmark, minutes).\n" + ExitCodes.HelpText)

@@ -27,7 +27,7 @@ public static class Calibrator
             return new ShapeCalibration(shape, choice, null, null, null);
         }
 
-        var nulls = Simulate(shape, choice, Departure.None, settings.Seed, settings.NullDraws);
+        var nulls = Simulate(shape, choice, Departure.None, settings.Seed, settings.NullDrawsFor(shape.Count));
         var normalityNull = new NullDistribution(nulls.Select(s => s.Normality));
         var spreadNull = new NullDistribution(nulls.Select(s => s.Spread));
         RateEstimate Rate(Departure departure, int seed)

@@ -22,6 +22,9 @@ public static class ProblemCodes
     public const string BadAdjust = "design.bad-adjust";
     public const string BadKind = "design.bad-kind";
     public const string MissingColumn = "design.missing-column";
+    public const string BadModel = "design.bad-model";
+    public const string UnknownTerm = "design.unknown-term";
+    public const string DuplicateTerm = "design.duplicate-term";
 
     public const string DataNotFound = "data.not-found";
     public const string DataUnreadable = "data.unreadable";
@@ -31,6 +34,7 @@ public static class ProblemCodes
     public const string DuplicateColumn = "data.duplicate-column";
     public const string RaggedRow = "data.ragged-row";
     public const string BadRunOrder = "data.bad-run-order";
+    public const string NonNumericLevel = "data.non-numeric-level";
 
     public const string OutputIsInput = "output.is-input";
     public const string OutputUnwritable = "output.unwritable";

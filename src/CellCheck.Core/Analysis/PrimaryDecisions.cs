@@ -1,5 +1,6 @@
 using CellCheck.Core.Calibration;
 using CellCheck.Core.Cells;
+using CellCheck.Core.Residuals;
 using CellCheck.Core.Statistics;
 
 namespace CellCheck.Core.Analysis;
@@ -11,17 +12,12 @@ namespace CellCheck.Core.Analysis;
 /// </summary>
 internal static class PrimaryDecisions
 {
-    public static List<AssumptionVerdict> Decide(CellPartition partition, PooledResult pooled, SpreadResult spread, ShapeCalibration calibration, double alpha)
+    public static List<AssumptionVerdict> Decide(CellPartition partition, ResidualSet residuals, PooledResult pooled, SpreadResult spread,
+        ShapeCalibration calibration, double alpha)
     {
-        var cells = GroupFilter.AtLeast(partition.Values, 2);
         var choice = calibration.Choice;
-        var shape = calibration.Shape;
-        double normality = double.NaN, spreadStat = double.NaN, pNormality = double.NaN, pSpread = double.NaN;
-        if (shape.Sizes.Length > 0)
-        {
-            var evaluator = new PrimaryEvaluator(choice, shape.Count, shape.Sizes.Length, shape.Sizes[^1]);
-            (normality, spreadStat) = evaluator.Evaluate(cells);
-        }
+        double pNormality, pSpread;
+        var (normality, spreadStat) = new PrimaryEvaluator(choice, partition.Values.Starts).Stats(residuals.Residuals, residuals.Studentized);
 
         var normalityCheck = choice.Normality == NormalityPrimary.ShapiroWilkPooled ? CheckNames.ShapiroWilk : CheckNames.AndersonDarling;
         var spreadCheck = choice.Spread switch

@@ -21,9 +21,8 @@ public static class ResponseAnalyzer
         var cells = CellChecks.Run(partition, residuals, column.Origin, options);
         var pooled = PooledChecks.Run(residuals, options.Alpha);
         var spread = SpreadChecks.Run(partition, residuals, cells, options.Alpha);
-        var shape = new DesignShape(Enumerable.Range(0, partition.CellCount).Select(partition.Size));
-        var calibration = Calibrator.Calibrate(shape, options.Alpha, options.Simulation);
-        var assumptions = PrimaryDecisions.Decide(partition, pooled, spread, calibration, options.Alpha);
+        var calibration = Calibrator.Calibrate(residuals.NullPlan, options.Alpha, options.Simulation);
+        var assumptions = PrimaryDecisions.Decide(partition, residuals, pooled, spread, calibration, options.Alpha);
         var verdict = VerdictWriter.Write(new VerdictInputs(census, cells, pooled, spread, partition.Factors, assumptions, calibration.Operating), options);
         return new ResponseReport(column.Name, column.Unit, partition.Values.Count, data.Excluded[response], census, cells, pooled, spread, verdict);
     }

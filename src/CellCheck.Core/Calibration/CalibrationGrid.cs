@@ -48,7 +48,7 @@ public static class CalibrationGrid
         var heavy = Rates(Departure.HeavyTails, settings.Seed + 14);
         var bestVariance = Array.IndexOf(variance, variance.MaxBy(r => r.Hits)!);
         var bestLognormal = Array.IndexOf(lognormal, lognormal.MaxBy(r => r.Hits)!);
-        var heavyDraws = Calibrator.Simulate(design.Shape, calibration.Choice, Departure.HeavyTails, settings.Seed + 15, settings.ScenarioDraws);
+        var heavyDraws = Calibrator.Simulate(new CellMeansPlan(design.Shape), calibration.Choice, Departure.HeavyTails, settings.Seed + 15, settings.ScenarioDraws);
         var heavySpread = heavyDraws.Count(d => FamilyDecision.Adjusted([calibration.NormalityNull!.PValue(d.Normality), calibration.SpreadNull!.PValue(d.Spread)])[1] < alpha);
         return new GridRow(design, calibration.Choice, operating.FalseAlarm, operating.VarianceRatio4, operating.Lognormal,
             CandidateTests.Names[bestVariance], variance[bestVariance], CandidateTests.Names[bestLognormal], lognormal[bestLognormal],
@@ -57,17 +57,14 @@ public static class CalibrationGrid
 
     private static double[][] Candidates(DesignShape shape, Departure departure, int seed, int draws)
     {
-        var starts = new int[shape.Sizes.Length + 1];
-        for (var c = 0; c < shape.Sizes.Length; c++)
-        {
-            starts[c + 1] = starts[c] + shape.Sizes[c];
-        }
+        var starts = new CellMeansPlan(shape).CellStarts;
+        var eligible = Enumerable.Range(0, shape.Sizes.Length).ToArray();
 
         var results = new double[draws][];
         Parallel.For(0, draws, i =>
         {
             var values = new double[shape.Count];
-            DrawGenerator.Fill(shape, departure, seed, i, values);
+            DrawGenerator.Fill(starts, eligible, departure, seed, i, values);
             results[i] = CandidateTests.Evaluate(new GroupedValues(values, starts));
         });
         return results;

@@ -1,5 +1,4 @@
 using System.Collections.Concurrent;
-using CellCheck.Core.Statistics;
 
 namespace CellCheck.Core.Calibration;
 
@@ -10,29 +9,34 @@ namespace CellCheck.Core.Calibration;
 /// </summary>
 public static class Calibrator
 {
-    private static readonly ConcurrentDictionary<(string Shape, double Alpha, CalibrationSettings Settings), Lazy<ShapeCalibration>> Cache = new();
+    private static readonly ConcurrentDictionary<(string Plan, double Alpha, CalibrationSettings Settings), Lazy<ShapeCalibration>> Cache = new();
 
-    public static ShapeCalibration Calibrate(DesignShape shape, double alpha, CalibrationSettings settings)
+    /// <summary>Calibration of the cell-means model for these replicated cell sizes.</summary>
+    public static ShapeCalibration Calibrate(DesignShape shape, double alpha, CalibrationSettings settings) =>
+        Calibrate(new CellMeansPlan(shape), alpha, settings);
+
+    public static ShapeCalibration Calibrate(INullPlan plan, double alpha, CalibrationSettings settings)
     {
-        ArgumentNullException.ThrowIfNull(shape);
+        ArgumentNullException.ThrowIfNull(plan);
         ArgumentNullException.ThrowIfNull(settings);
-        return Cache.GetOrAdd((shape.Key, alpha, settings), _ => new Lazy<ShapeCalibration>(() => Build(shape, alpha, settings))).Value;
+        return Cache.GetOrAdd((plan.Key, alpha, settings), _ => new Lazy<ShapeCalibration>(() => Build(plan, alpha, settings))).Value;
     }
 
-    private static ShapeCalibration Build(DesignShape shape, double alpha, CalibrationSettings settings)
+    private static ShapeCalibration Build(INullPlan plan, double alpha, CalibrationSettings settings)
     {
-        var choice = PrimaryRules.Choose(shape);
-        if (shape.Count > settings.MonteCarloLimit || shape.Sizes.Length == 0)
+        var shape = plan.Shape;
+        var choice = PrimaryRules.Choose(shape, plan.UsableResiduals);
+        if (plan.Rows > settings.MonteCarloLimit || plan.UsableResiduals == 0)
         {
             return new ShapeCalibration(shape, choice, null, null, null);
         }
 
-        var nulls = Simulate(shape, choice, Departure.None, settings.Seed, settings.NullDrawsFor(shape.Count));
+        var nulls = Simulate(plan, choice, Departure.None, settings.Seed, settings.NullDrawsFor(plan.Rows));
         var normalityNull = new NullDistribution(nulls.Select(s => s.Normality));
         var spreadNull = new NullDistribution(nulls.Select(s => s.Spread));
         RateEstimate Rate(Departure departure, int seed)
         {
-            var draws = Simulate(shape, choice, departure, seed, settings.ScenarioDraws);
+            var draws = Simulate(plan, choice, departure, seed, settings.ScenarioDraws);
             var hits = draws.Count(d => FamilyDecision.AnyFlag([normalityNull.PValue(d.Normality), spreadNull.PValue(d.Spread)], alpha));
             return new RateEstimate(hits, draws.Length);
         }
@@ -42,22 +46,17 @@ public static class Calibrator
         return new ShapeCalibration(shape, choice, normalityNull, spreadNull, operating);
     }
 
-    /// <summary>Primary statistics of <paramref name="draws"/> simulated data sets of this shape.</summary>
-    internal static (double Normality, double Spread)[] Simulate(DesignShape shape, PrimaryChoice choice, Departure departure, int seed, int draws)
+    /// <summary>Primary statistics of <paramref name="draws"/> simulated data sets for this plan.</summary>
+    internal static (double Normality, double Spread)[] Simulate(INullPlan plan, PrimaryChoice choice, Departure departure, int seed, int draws)
     {
         var results = new (double, double)[draws];
-        var starts = new int[shape.Sizes.Length + 1];
-        for (var c = 0; c < shape.Sizes.Length; c++)
-        {
-            starts[c + 1] = starts[c] + shape.Sizes[c];
-        }
-
         Parallel.For(0, draws,
-            () => (Values: new double[shape.Count], Evaluator: new PrimaryEvaluator(choice, shape.Count, shape.Sizes.Length, shape.Sizes[^1])),
+            () => new SimulationWorkspace(plan, choice),
             (i, _, local) =>
             {
-                DrawGenerator.Fill(shape, departure, seed, i, local.Values);
-                results[i] = local.Evaluator.Evaluate(new GroupedValues(local.Values, starts));
+                DrawGenerator.Fill(plan.CellStarts, local.Evaluator.ReplicatedCells, departure, seed, i, local.Values);
+                plan.Residualize(local.Values, local.Residuals, local.Studentized);
+                results[i] = local.Evaluator.Stats(local.Residuals, local.Studentized);
                 return local;
             },
             _ => { });

@@ -3,7 +3,7 @@ using MathNet.Numerics.Random;
 namespace CellCheck.Core.Calibration;
 
 /// <summary>
-/// Seeded simulated data for a <see cref="DesignShape"/>: standard normal errors cell by cell (Box-Muller on
+/// Seeded simulated data for a layout of cells: standard normal errors row by row (Box-Muller on
 /// MathNet's xoshiro256** generator), with an optional departure in one cell (cell <c>draw mod k</c>, so that
 /// rates average over every cell). Draw i of a seed is the same whatever
 /// the order or thread in which draws are made.
@@ -13,16 +13,13 @@ internal static class DrawGenerator
     /// <summary>Lognormal shape parameter σ of the skewed-cell departure.</summary>
     public const double LognormalShape = 0.5;
 
-    public static void Fill(DesignShape shape, Departure departure, int seed, int draw, double[] values)
+    public static void Fill(int[] cellStarts, int[] eligibleCells, Departure departure, int seed, int draw, double[] values)
     {
         var random = new Xoshiro256StarStar(Mix(seed, draw), threadSafe: false);
-        var at = 0;
-        for (var c = 0; c < shape.Sizes.Length; c++)
+        var rows = cellStarts[^1];
+        for (var i = 0; i < rows; i++)
         {
-            for (var j = 0; j < shape.Sizes[c]; j++)
-            {
-                values[at++] = Normal(random);
-            }
+            values[i] = Normal(random);
         }
 
         if (departure == Departure.None)
@@ -33,7 +30,7 @@ internal static class DrawGenerator
         if (departure == Departure.HeavyTails)
         {
             // t(5) = z / sqrt(chi2(5) / 5), standardised by its SD sqrt(5 / 3)
-            for (var i = 0; i < shape.Count; i++)
+            for (var i = 0; i < rows; i++)
             {
                 var chi2 = 0.0;
                 for (var d = 0; d < 5; d++)
@@ -48,18 +45,19 @@ internal static class DrawGenerator
             return;
         }
 
-        // the departing cell rotates over the cells with the draw index, so rates average over cells of every size
-        var cell = draw % shape.Sizes.Length;
-        var start = 0;
-        for (var c = 0; c < cell; c++)
+        if (eligibleCells.Length == 0)
         {
-            start += shape.Sizes[c];
+            return;
         }
+
+        // the departing cell rotates over the replicated cells with the draw index, so rates average over every cell
+        var cell = eligibleCells[draw % eligibleCells.Length];
+        var start = cellStarts[cell];
 
         var s2 = LognormalShape * LognormalShape;
         var mean = Math.Exp(s2 / 2);
         var sd = Math.Sqrt((Math.Exp(s2) - 1) * Math.Exp(s2));
-        for (var i = start; i < start + shape.Sizes[cell]; i++)
+        for (var i = start; i < cellStarts[cell + 1]; i++)
         {
             values[i] = departure == Departure.VarianceRatio4 ? 2.0 * values[i] : (Math.Exp(LognormalShape * values[i]) - mean) / sd;
         }

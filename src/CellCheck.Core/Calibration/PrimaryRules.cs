@@ -9,12 +9,15 @@ public static class PrimaryRules
     /// <summary>Shapiro-Wilk's p approximation holds up to this many values (Royston 1995, algorithm AS R94).</summary>
     public const int ShapiroWilkLimit = 5000;
 
-    public static PrimaryChoice Choose(DesignShape shape)
+    public static PrimaryChoice Choose(DesignShape shape) => Choose(shape, shape?.Count ?? 0);
+
+    /// <summary>Chooses the primary checks for replicated cells of these sizes and this many usable residuals.</summary>
+    public static PrimaryChoice Choose(DesignShape shape, int usableResiduals)
     {
         ArgumentNullException.ThrowIfNull(shape);
-        var (normality, normalityReason) = shape.Count switch
+        var (normality, normalityReason) = usableResiduals switch
         {
-            < 3 => (NormalityPrimary.None, "fewer than three residuals in cells with two or more values: normality cannot be judged"),
+            < 3 => (NormalityPrimary.None, "fewer than three usable residuals: normality cannot be judged"),
             <= ShapiroWilkLimit => (NormalityPrimary.ShapiroWilkPooled,
                 "Shapiro-Wilk on the pooled studentized residuals: among the common omnibus tests it has the best power over a wide "
                 + "range of alternatives (Razali & Wah 2011); one pooled test sees more than many small per-cell tests and adds no "

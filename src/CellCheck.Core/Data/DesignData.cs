@@ -10,7 +10,8 @@ public sealed class DesignData
         IReadOnlyList<FactorColumn> factors,
         IReadOnlyList<ResponseColumn> responses,
         int[] sourceLines,
-        IReadOnlyList<IReadOnlyList<ExcludedRow>> excluded)
+        IReadOnlyList<IReadOnlyList<ExcludedRow>> excluded,
+        IReadOnlyList<FactorColumn>? blocks = null)
     {
         ArgumentNullException.ThrowIfNull(factors);
         ArgumentNullException.ThrowIfNull(responses);
@@ -21,7 +22,8 @@ public sealed class DesignData
             throw new ArgumentException("one exclusion list per response is required", nameof(excluded));
         }
 
-        foreach (var f in factors)
+        blocks ??= [];
+        foreach (var f in factors.Concat(blocks))
         {
             if (f.Codes.Length != sourceLines.Length)
             {
@@ -38,12 +40,16 @@ public sealed class DesignData
         }
 
         Factors = factors;
+        Blocks = blocks;
         Responses = responses;
         SourceLines = sourceLines;
         Excluded = excluded;
     }
 
     public IReadOnlyList<FactorColumn> Factors { get; }
+
+    /// <summary>Nuisance factors: they enter the model additively and do not define cells.</summary>
+    public IReadOnlyList<FactorColumn> Blocks { get; }
 
     public IReadOnlyList<ResponseColumn> Responses { get; }
 

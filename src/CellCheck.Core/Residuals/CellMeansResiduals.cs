@@ -1,3 +1,4 @@
+using CellCheck.Core.Calibration;
 using CellCheck.Core.Cells;
 using CellCheck.Core.Statistics;
 
@@ -46,6 +47,7 @@ public sealed class CellMeansResiduals : IResidualSource
             }
         }
 
-        return new ResidualSet(Name, residuals, fitted, studentized, s, df, WithinCellShift: true);
+        var plan = new CellMeansPlan(new DesignShape(Enumerable.Range(0, grouped.GroupCount).Select(grouped.Size)));
+        return new ResidualSet(Name, residuals, fitted, studentized, s, df, plan, WithinCellShift: true);
     }
 }

@@ -1,3 +1,5 @@
+using CellCheck.Core.Calibration;
+
 namespace CellCheck.Core.Residuals;
 
 /// <summary>
@@ -6,7 +8,8 @@ namespace CellCheck.Core.Residuals;
 /// singleton cell), the pooled residual standard deviation and its degrees of freedom.
 /// <see cref="WithinCellShift"/> is true when every residual is its value minus one constant per cell (the
 /// cell-means model): then checks that are invariant to a shift within each cell run on the values themselves,
-/// so exact ties in the data stay exact (rank-based tests depend on them).
+/// so exact ties in the data stay exact (rank-based tests depend on them). <see cref="NullPlan"/> tells the
+/// calibration how to simulate this model's residuals under the null.
 /// </summary>
 public sealed record ResidualSet(string Model, double[] Residuals, double[] Fitted, double[] Studentized, double ResidualSd, int ResidualDf,
-    bool WithinCellShift = false);
+    INullPlan NullPlan, bool WithinCellShift = false);

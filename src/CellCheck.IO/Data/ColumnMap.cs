@@ -26,7 +26,7 @@ internal sealed record ColumnMap(int[] Factors, int[] Responses, int? RunOrder, 
             return -1;
         }
 
-        var factors = design.Factors.Select(Find).ToArray();
+        var factors = design.Factors.Concat(design.Blocks).Select(Find).ToArray();
         var responses = design.Responses.Select(Find).ToArray();
         int? runOrder = design.RunOrder is { } ro ? Find(ro) : null;
         return new ColumnMap(factors, responses, runOrder, problems);

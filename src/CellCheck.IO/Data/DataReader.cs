@@ -67,7 +67,8 @@ public static class DataReader
             return LoadResult<DesignData>.Failure(columns.Problems);
         }
 
-        var factors = design.Factors.Select(f => new LevelInterner(f.Name, 1024)).ToArray();
+        var factorSpecs = design.Factors.Concat(design.Blocks).ToArray();
+        var factors = factorSpecs.Select(f => new LevelInterner(f.Name, 1024)).ToArray();
         var responses = design.Responses.Select(r => new ResponseBuilder(r.Name, r.Unit, 1024)).ToArray();
         var lines = new List<int>(1024);
         var lastLine = 1;
@@ -84,14 +85,14 @@ public static class DataReader
                     var text = row[columns.Factors[f]].Span.Trim();
                     var missing = MissingTokens.IsMissing(text);
                     factors[f].Add(missing ? [] : text);
-                    missingFactor ??= missing ? design.Factors[f].Name : null;
+                    missingFactor ??= missing ? factorSpecs[f].Name : null;
                 }
 
                 for (var r = 0; r < responses.Length; r++)
                 {
                     if (missingFactor is not null)
                     {
-                        responses[r].Exclude(line, "missing-factor", $"missing value for factor {missingFactor}");
+                        responses[r].Exclude(line, "missing-factor", $"missing value for {missingFactor}");
                     }
                     else
                     {
@@ -113,11 +114,19 @@ public static class DataReader
                 "The data file has a header but no data rows.", "Add one line per run below the header."));
         }
 
+        var numericProblems = NumericLevels.Check(design, factors);
+        if (numericProblems.Count > 0)
+        {
+            return LoadResult<DesignData>.Failure(numericProblems);
+        }
+
+        var built = factors.Select((f, i) => f.Build(i < design.Factors.Count && design.Factors[i].Kind == FactorKind.Numeric)).ToArray();
         var data = new DesignData(
-            factors.Select(f => f.Build()).ToArray(),
+            built[..design.Factors.Count],
             responses.Select(r => r.Build()).ToArray(),
             [.. lines],
-            responses.Select(r => r.Excluded).ToArray());
+            responses.Select(r => r.Excluded).ToArray(),
+            built[design.Factors.Count..]);
         return LoadResult<DesignData>.Success(data);
     }
 

@@ -34,7 +34,10 @@ internal sealed class LevelInterner(string name, int capacity)
         _codes.Add(code);
     }
 
-    public FactorColumn Build()
+    /// <summary>The first label that is not a number, or null when every label is one.</summary>
+    public string? FirstNonNumeric() => _labels.FirstOrDefault(l => !double.TryParse(l, NumberStyles.Float, CultureInfo.InvariantCulture, out _));
+
+    public FactorColumn Build(bool asNumbers = false)
     {
         var order = Enumerable.Range(0, _labels.Count).ToArray();
         var numbers = new double[_labels.Count];
@@ -68,6 +71,6 @@ internal sealed class LevelInterner(string name, int capacity)
             codes[row] = c < 0 ? c : remap[c];
         }
 
-        return new FactorColumn(name, sorted, codes);
+        return new FactorColumn(name, sorted, codes, asNumbers ? sorted.Select(l => double.Parse(l, NumberStyles.Float, CultureInfo.InvariantCulture)).ToArray() : null);
     }
 }

@@ -13,4 +13,6 @@ public sealed record DesignFile(
     IReadOnlyList<ColumnSpec> Responses,
     ColumnSpec? RunOrder,
     double Alpha,
-    AdjustMethod Adjust);
+    AdjustMethod Adjust,
+    IReadOnlyList<ColumnSpec> Blocks,
+    ModelDeclaration Model);

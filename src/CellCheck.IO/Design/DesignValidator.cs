@@ -34,11 +34,13 @@ internal sealed class DesignValidator(string path, YamlMappingNode root, string[
         var entries = new ColumnEntryReader(path, _problems);
         var factors = seen.TryGetValue("factors", out var f) ? entries.ReadList(f, "factors", isFactor: true) : Missing("factors", "the factor columns, for example factors: [temperature, speed]");
         var responses = seen.TryGetValue("responses", out var r) ? entries.ReadList(r, "responses", isFactor: false) : Missing("responses", "the measured response columns, for example responses: [yield]");
+        var blocks = seen.TryGetValue("blocks", out var bl) ? entries.ReadList(bl, "blocks", isFactor: false) : [];
         var runOrder = seen.TryGetValue("run_order", out var ro) ? entries.ReadEntry(ro, isFactor: false, "run_order") : null;
+        var model = seen.TryGetValue("model", out var mo) ? ModelReader.Read(mo, factors, blocks, path, _problems) : ModelDeclaration.Default;
         var alpha = ReadAlpha(seen);
         var adjust = ReadAdjust(seen);
         var name = seen.TryGetValue("name", out var n) ? Scalar(n, "name") : null;
-        CrossCheck(factors, responses, runOrder);
+        CrossCheck(factors.Concat(blocks).ToList(), responses, runOrder);
 
         if (_problems.Count > 0 || data is null)
         {
@@ -47,7 +49,7 @@ internal sealed class DesignValidator(string path, YamlMappingNode root, string[
 
         var folder = System.IO.Path.GetDirectoryName(System.IO.Path.GetFullPath(path)) ?? ".";
         var dataPath = System.IO.Path.GetFullPath(System.IO.Path.Combine(folder, data.Value.Text));
-        return LoadResult<DesignFile>.Success(new DesignFile(path, name, dataPath, data.Value.Text, data.Value.Mark, factors, responses, runOrder, alpha, adjust));
+        return LoadResult<DesignFile>.Success(new DesignFile(path, name, dataPath, data.Value.Text, data.Value.Mark, factors, responses, runOrder, alpha, adjust, blocks, model));
     }
 
     private void CrossCheck(IReadOnlyList<ColumnSpec> factors, IReadOnlyList<ColumnSpec> responses, ColumnSpec? runOrder)
@@ -59,7 +61,7 @@ internal sealed class DesignValidator(string path, YamlMappingNode root, string[
             if (!names.TryAdd(spec.Name, spec))
             {
                 Add(ProblemCodes.DuplicateName, spec.Mark, $"The name '{spec.Name}' is used twice (first at line {names[spec.Name].Mark.Line}).",
-                    "Give each factor and response its own column, or a distinct display name.");
+                    "Give each factor, block and response its own column, or a distinct display name.");
             }
         }
 

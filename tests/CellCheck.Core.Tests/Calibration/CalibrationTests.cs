@@ -74,8 +74,8 @@ public sealed class CalibrationTests
     {
         var shape = new DesignShape([4, 4, 5]);
         var choice = PrimaryRules.Choose(shape);
-        var a = Calibrator.Simulate(shape, choice, Departure.Lognormal, 3, 64);
-        var b = Calibrator.Simulate(shape, choice, Departure.Lognormal, 3, 64);
+        var a = Calibrator.Simulate(new CellMeansPlan(shape), choice, Departure.Lognormal, 3, 64);
+        var b = Calibrator.Simulate(new CellMeansPlan(shape), choice, Departure.Lognormal, 3, 64);
         Assert.Equal(a, b);
     }
 }

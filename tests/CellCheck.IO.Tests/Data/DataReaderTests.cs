@@ -50,7 +50,7 @@ public sealed class DataReaderTests
         Assert.Equal([2, 3, 4, 5, 6], excluded.Select(e => e.Line));
         Assert.Equal(["missing", "missing", "not-a-number", "not-finite", "missing-factor"], excluded.Select(e => e.Code));
         Assert.Contains("'abc'", excluded[2].Reason, StringComparison.Ordinal);
-        Assert.Contains("factor b", excluded[4].Reason, StringComparison.Ordinal);
+        Assert.Contains("for b", excluded[4].Reason, StringComparison.Ordinal);
         Assert.Equal(1, d.Responses[0].Values.Count(double.IsFinite));
     }
 

@@ -11,4 +11,7 @@ public static class CheckNames
     public const string BrownForsytheZerosRemoved = "brown-forsythe-zeros-removed";
     public const string Bartlett = "bartlett";
     public const string FlignerKilleen = "fligner-killeen";
+    public const string TukeyNonadditivity = "tukey-nonadditivity";
+    public const string LackOfFit = "lack-of-fit";
+    public const string Outliers = "outliers";
 }

@@ -1,29 +1,54 @@
 using CellCheck.Core.Calibration;
 using CellCheck.Core.Cells;
 using CellCheck.Core.Data;
+using CellCheck.Core.Models;
 using CellCheck.Core.Residuals;
 
 namespace CellCheck.Core.Analysis;
 
-/// <summary>Runs every check for one response: cells, census, residuals, within-cell, pooled and spread checks, verdict.</summary>
+/// <summary>Runs every check for one response: cells, census, model residuals, within-cell, pooled, spread and model checks, verdict.</summary>
 public static class ResponseAnalyzer
 {
-    /// <summary>Analyses response <paramref name="response"/> of <paramref name="data"/>, with cell-means residuals unless another source is given.</summary>
-    public static ResponseReport Analyze(DesignData data, int response, AnalysisOptions options, IResidualSource? source = null)
+    /// <summary>Analyses response <paramref name="response"/> of <paramref name="data"/> under <paramref name="spec"/>
+    /// (default: the full factorial in the factors, with additive blocks).</summary>
+    public static ResponseReport Analyze(DesignData data, int response, AnalysisOptions options, ModelSpec? spec = null)
     {
         ArgumentNullException.ThrowIfNull(data);
         ArgumentNullException.ThrowIfNull(options);
-        source ??= new CellMeansResiduals();
+        spec ??= ModelSpec.Full(data.Factors.Count);
         var column = data.Responses[response];
-        var partition = CellPartition.Build(data.Factors, column.Values);
+        var partition = CellPartition.Build(data.Factors, column.Values, data.Blocks);
         var census = CensusBuilder.Build(partition);
+        var source = ResidualSources.For(data, spec, ModelName(data, spec));
         var residuals = source.Compute(partition);
         var cells = CellChecks.Run(partition, residuals, column.Origin, options);
         var pooled = PooledChecks.Run(residuals, options.Alpha);
         var spread = SpreadChecks.Run(partition, residuals, cells, options.Alpha);
+        var model = ModelChecks.Run(partition, data.Blocks, spec, residuals, data.SourceLines, options.Alpha);
         var calibration = Calibrator.Calibrate(residuals.NullPlan, options.Alpha, options.Simulation);
         var assumptions = PrimaryDecisions.Decide(partition, residuals, pooled, spread, calibration, options.Alpha);
-        var verdict = VerdictWriter.Write(new VerdictInputs(census, cells, pooled, spread, partition.Factors, assumptions, calibration.Operating), options);
-        return new ResponseReport(column.Name, column.Unit, partition.Values.Count, data.Excluded[response], census, cells, pooled, spread, verdict);
+        var verdict = VerdictWriter.Write(new VerdictInputs(census, cells, pooled, spread, partition.Factors, assumptions, calibration.Operating, model), options);
+        return new ResponseReport(column.Name, column.Unit, partition.Values.Count, data.Excluded[response], census, cells, pooled, spread, verdict)
+        {
+            Model = model,
+            Rows = Rows(partition, residuals, data.SourceLines, column.Origin),
+        };
+    }
+
+    private static string ModelName(DesignData data, ModelSpec spec) =>
+        string.Join(" + ", spec.Terms.Select(t => t.Name(data.Factors)).Concat(data.Blocks.Select(b => b.Name)));
+
+    private static RowDiagnostics Rows(CellPartition partition, ResidualSet r, int[] sourceLines, double origin)
+    {
+        var n = partition.RowOrder.Length;
+        var cells = new int[n];
+        for (var c = 0; c < partition.CellCount; c++)
+        {
+            Array.Fill(cells, c, partition.Values.Starts[c], partition.Size(c));
+        }
+
+        var d = r.Diagnostics!;
+        return new RowDiagnostics(partition.RowOrder.Select(row => sourceLines[row]).ToArray(), cells, r.Fitted.Select(f => f + origin).ToArray(),
+            r.Residuals, r.Studentized, d.StudentizedExternal, d.Leverage, d.CooksDistance);
     }
 }

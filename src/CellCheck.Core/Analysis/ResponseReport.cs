@@ -13,4 +13,11 @@ public sealed record ResponseReport(
     IReadOnlyList<CellResult> Cells,
     PooledResult Pooled,
     SpreadResult Spread,
-    Verdict Verdict);
+    Verdict Verdict)
+{
+    /// <summary>The fitted model and the checks of its form.</summary>
+    public required ModelResult Model { get; init; }
+
+    /// <summary>Per-row diagnostics in cell order.</summary>
+    public required RowDiagnostics Rows { get; init; }
+}

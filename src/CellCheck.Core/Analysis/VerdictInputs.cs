@@ -12,4 +12,5 @@ internal sealed record VerdictInputs(
     SpreadResult Spread,
     IReadOnlyList<FactorColumn> Factors,
     IReadOnlyList<AssumptionVerdict> Assumptions,
-    OperatingCharacteristics? Operating);
+    OperatingCharacteristics? Operating,
+    ModelResult Model);

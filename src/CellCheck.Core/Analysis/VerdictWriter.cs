@@ -37,6 +37,7 @@ internal static class VerdictWriter
                 + " per cell, moderate departures can go unseen: absence of evidence is not proof that the assumptions hold.");
         }
 
+        ModelText.Add(x.Model, findings);
         SupportingText.Add(x, normality, spread, findings);
         NotJudged(x, normality, spread, findings);
         var status = anyFlag ? CheckStatus.Flag : judged.Count == 0 ? CheckStatus.NotTestable : CheckStatus.Pass;

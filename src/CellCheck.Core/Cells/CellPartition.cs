@@ -51,12 +51,25 @@ public sealed class CellPartition
     }
 
     /// <summary>
-    /// Splits the rows that have a value (not NaN) and a level on every factor into cells.
+    /// Splits the rows that have a value (not NaN), a level on every factor and on every block into cells.
     /// </summary>
-    public static CellPartition Build(IReadOnlyList<FactorColumn> factors, double[] values)
+    public static CellPartition Build(IReadOnlyList<FactorColumn> factors, double[] values, IReadOnlyList<FactorColumn>? blocks = null)
     {
         ArgumentNullException.ThrowIfNull(factors);
         ArgumentNullException.ThrowIfNull(values);
+        if (blocks is { Count: > 0 })
+        {
+            // a row without a block level cannot enter the model: treat it like a missing value
+            values = (double[])values.Clone();
+            for (var row = 0; row < values.Length; row++)
+            {
+                if (blocks.Any(b => b.Codes[row] < 0))
+                {
+                    values[row] = double.NaN;
+                }
+            }
+        }
+
         var cellOfRow = new int[values.Length];
         var cellLevels = CellIndexer.Assign(factors, values, cellOfRow, out var cellCount);
 

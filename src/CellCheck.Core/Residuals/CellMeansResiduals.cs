@@ -48,6 +48,45 @@ public sealed class CellMeansResiduals : IResidualSource
         }
 
         var plan = new CellMeansPlan(new DesignShape(Enumerable.Range(0, grouped.GroupCount).Select(grouped.Size)));
-        return new ResidualSet(Name, residuals, fitted, studentized, s, df, plan, WithinCellShift: true);
+        return new ResidualSet(Name, residuals, fitted, studentized, s, df, plan, WithinCellShift: true)
+        {
+            Diagnostics = Diagnose(partition, residuals, ss, df),
+        };
+    }
+
+    /// <summary>Leverage 1/n_i; external studentized e / (s_(i) √(1 − h)) with s_(i)² = (RSS − e²/(1 − h)) / (df − 1);
+    /// Cook's distance r² h / (k (1 − h)) with k cells (Cook 1977). NaN for singletons.</summary>
+    private static ResidualDiagnostics Diagnose(CellPartition partition, double[] residuals, double rss, int df)
+    {
+        var grouped = partition.Values;
+        var n = residuals.Length;
+        var leverage = new double[n];
+        var external = new double[n];
+        var cooks = new double[n];
+        var k = grouped.GroupCount;
+        var s = df > 0 ? Math.Sqrt(rss / df) : double.NaN;
+        for (var c = 0; c < k; c++)
+        {
+            var h = 1.0 / grouped.Size(c);
+            for (var i = grouped.Starts[c]; i < grouped.Starts[c + 1]; i++)
+            {
+                leverage[i] = h;
+                if (h >= 1 || df < 2 || !(s > 0))
+                {
+                    external[i] = double.NaN;
+                    cooks[i] = double.NaN;
+                    continue;
+                }
+
+                var e = residuals[i];
+                var deleted = Math.Sqrt(Math.Max(0, (rss - (e * e / (1 - h))) / (df - 1)));
+                external[i] = e / (deleted * Math.Sqrt(1 - h));
+                var r = e / (s * Math.Sqrt(1 - h));
+                cooks[i] = r * r * h / (k * (1 - h));
+            }
+        }
+
+        var terms = Models.ModelSpec.Full(partition.Factors.Count).Terms.Select(t => t.Name(partition.Factors)).ToArray();
+        return new ResidualDiagnostics(leverage, external, cooks, new Models.ModelInfo("cell-means", terms, k, k, df, [], []));
     }
 }

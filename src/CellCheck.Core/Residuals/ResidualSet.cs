@@ -12,4 +12,8 @@ namespace CellCheck.Core.Residuals;
 /// calibration how to simulate this model's residuals under the null.
 /// </summary>
 public sealed record ResidualSet(string Model, double[] Residuals, double[] Fitted, double[] Studentized, double ResidualSd, int ResidualDf,
-    INullPlan NullPlan, bool WithinCellShift = false);
+    INullPlan NullPlan, bool WithinCellShift = false)
+{
+    /// <summary>Leverage, external studentized residuals, Cook's distance and the model description.</summary>
+    public ResidualDiagnostics? Diagnostics { get; init; }
+}

@@ -27,4 +27,16 @@ public static class NotTestableReason
 
     /// <summary>No residual degrees of freedom remain (every cell a singleton).</summary>
     public const string NoResidualDegreesOfFreedom = "no-residual-df";
+
+    /// <summary>No rows share identical settings of every factor and block, so there is no pure error.</summary>
+    public const string NoPureError = "no-pure-error";
+
+    /// <summary>The model already fits every distinct setting: no lack-of-fit degrees of freedom remain.</summary>
+    public const string SaturatedModel = "saturated-model";
+
+    /// <summary>The model has interaction terms; the check applies to additive models.</summary>
+    public const string NotAdditive = "not-additive";
+
+    /// <summary>Too few residual degrees of freedom for the check.</summary>
+    public const string TooFewResidualDf = "too-few-residual-df";
 }

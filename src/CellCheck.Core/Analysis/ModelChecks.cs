@@ -1,0 +1,94 @@
+using CellCheck.Core.Cells;
+using CellCheck.Core.Data;
+using CellCheck.Core.Models;
+using CellCheck.Core.Residuals;
+using CellCheck.Core.Statistics;
+
+namespace CellCheck.Core.Analysis;
+
+/// <summary>Runs the checks of the model's form on a fitted response.</summary>
+internal static class ModelChecks
+{
+    public static ModelResult Run(CellPartition partition, IReadOnlyList<FactorColumn> blocks, ModelSpec spec, ResidualSet residuals,
+        int[] sourceLines, double alpha)
+    {
+        var diagnostics = residuals.Diagnostics!;
+        var info = diagnostics.Model;
+        var notes = new List<string>();
+        var checks = new List<CheckResult>();
+        var fit = diagnostics.Fit;
+        if (fit is not null && diagnostics.Design is not null)
+        {
+            var estimable = LinearFit.EstimableDesign(diagnostics.Design.X, fit);
+            checks.Add(spec.IsAdditive
+                ? CheckResults.From(CheckNames.TukeyNonadditivity, TukeyNonadditivity.Test(estimable, fit), alpha)
+                : CheckResults.NotTestable(CheckNames.TukeyNonadditivity, NotTestableReason.NotAdditive));
+            checks.Add(CheckResults.From(CheckNames.LackOfFit, LackOfFit.Test(fit, partition.Values.Values, Settings(partition, blocks)), alpha));
+        }
+
+        var screen = OutlierScreen.Screen(diagnostics.StudentizedExternal, residuals.ResidualDf, out var screened);
+        var outliers = screen.Where(s => s.PAdjusted < alpha)
+            .Select(s => new OutlierRow(sourceLines[partition.RowOrder[s.Row]], s.T, s.PAdjusted)).ToList();
+        checks.Add(screened == 0
+            ? CheckResults.NotTestable(CheckNames.Outliers, NotTestableReason.TooFewResidualDf)
+            : new CheckResult(CheckNames.Outliers, Math.Abs(screen[0].T), null, screen[0].PAdjusted, null, StatusRules.FromP(screen[0].PAdjusted, alpha), null));
+        Unreplicated(partition, blocks, residuals, notes);
+        var (effects, names) = Effects(partition, blocks, spec, residuals);
+        return new ModelResult(info, checks, outliers, screened, effects, names, notes);
+    }
+
+    /// <summary>Index of each row's identical-settings group (factor cell and block levels), in grouped order.</summary>
+    private static int[] Settings(CellPartition partition, IReadOnlyList<FactorColumn> blocks)
+    {
+        var groups = new Dictionary<string, int>(StringComparer.Ordinal);
+        var result = new int[partition.RowOrder.Length];
+        for (var c = 0; c < partition.CellCount; c++)
+        {
+            for (var i = partition.Values.Starts[c]; i < partition.Values.Starts[c + 1]; i++)
+            {
+                var row = partition.RowOrder[i];
+                var key = c.ToString(System.Globalization.CultureInfo.InvariantCulture) + "|" + string.Join("|", blocks.Select(b => b.Codes[row]));
+                if (!groups.TryGetValue(key, out var g))
+                {
+                    g = groups.Count;
+                    groups.Add(key, g);
+                }
+
+                result[i] = g;
+            }
+        }
+
+        return result;
+    }
+
+    private static void Unreplicated(CellPartition partition, IReadOnlyList<FactorColumn> blocks, ResidualSet residuals, List<string> notes)
+    {
+        var settings = Settings(partition, blocks);
+        if (settings.Distinct().Count() == settings.Length)
+        {
+            notes.Add(blocks.Count > 0
+                ? "Each cell holds one row per block: within-cell variance cannot be estimated apart from the model, so every check here rests on the declared model."
+                : "No setting is replicated: within-cell variance cannot be estimated, so every check here rests on the declared model.");
+        }
+
+        var leverageOne = residuals.Diagnostics!.Leverage.Count(h => h >= 1 - 1e-10);
+        if (leverageOne > 0)
+        {
+            notes.Add(leverageOne.ToString(System.Globalization.CultureInfo.InvariantCulture)
+                + " row(s) have leverage 1: the model fits them exactly, so their residuals carry no information and are not used.");
+        }
+    }
+
+    private static (LenthResult?, IReadOnlyList<string>) Effects(CellPartition partition, IReadOnlyList<FactorColumn> blocks, ModelSpec spec, ResidualSet residuals)
+    {
+        var twoLevel = partition.Factors.All(f => f.Levels.Count == 2 && !f.IsNumeric);
+        if (residuals.ResidualDf > 0 || blocks.Count > 0 || !twoLevel || partition.Factors.Count < 2)
+        {
+            return (null, []);
+        }
+
+        var codes = partition.Factors.Select(f => partition.RowOrder.Select(r => f.Codes[r]).ToArray()).ToList();
+        var terms = spec.Terms.Select(t => t.Factors).ToList();
+        return (LenthEffects.Analyze(codes, partition.Values.Values, terms), spec.Terms.Select(t => t.Name(partition.Factors)).ToArray());
+    }
+}

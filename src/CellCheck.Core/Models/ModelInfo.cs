@@ -1,0 +1,14 @@
+namespace CellCheck.Core.Models;
+
+/// <summary>
+/// What was fitted: the model's name, its terms, its rank and number of columns, the residual degrees of freedom,
+/// and the columns (and their terms) that are aliased with others and so were not estimated.
+/// </summary>
+public sealed record ModelInfo(
+    string Name,
+    IReadOnlyList<string> Terms,
+    int Rank,
+    int Columns,
+    int ResidualDf,
+    IReadOnlyList<string> AliasedColumns,
+    IReadOnlyList<string> AliasedTerms);

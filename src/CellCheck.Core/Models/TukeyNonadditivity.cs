@@ -1,0 +1,44 @@
+using CellCheck.Core.Statistics;
+
+namespace CellCheck.Core.Models;
+
+/// <summary>
+/// Tukey's (1949, "One degree of freedom for non-additivity", Biometrics 5, 232-242) test for non-additivity,
+/// in its general form for any additive linear model: the squared fitted values, made orthogonal to the model's
+/// columns (z = M ŷ²), give the one-degree-of-freedom sum of squares SS_N = (eᵀz)² / zᵀz, and
+/// F = SS_N / ((RSS − SS_N) / (ν − 1)) on 1 and ν − 1 degrees of freedom (ν the residual df). Equivalent to the F
+/// test of adding ŷ² to the model. Exact under normal errors when the additive model holds.
+/// </summary>
+public static class TukeyNonadditivity
+{
+    public static TestOutcome Test(double[,] estimableDesign, LinearFitResult fit)
+    {
+        ArgumentNullException.ThrowIfNull(estimableDesign);
+        ArgumentNullException.ThrowIfNull(fit);
+        if (fit.ResidualDf < 2)
+        {
+            return TestOutcome.NotTestable(NotTestableReason.NoResidualDegreesOfFreedom);
+        }
+
+        var squared = fit.Fitted.Select(v => v * v).ToArray();
+        var z = LinearFit.Fit(estimableDesign, squared).Residuals;
+        var ez = 0.0;
+        var zz = 0.0;
+        for (var i = 0; i < z.Length; i++)
+        {
+            ez += fit.Residuals[i] * z[i];
+            zz += z[i] * z[i];
+        }
+
+        var scale = squared.Sum(v => v * v);
+        if (!(zz > 1e-20 * scale) || !(fit.ResidualSumOfSquares > 0))
+        {
+            return TestOutcome.NotTestable(NotTestableReason.DegenerateWithinGroups);
+        }
+
+        var ssn = ez * ez / zz;
+        var df2 = fit.ResidualDf - 1;
+        var f = ssn / Math.Max(0, (fit.ResidualSumOfSquares - ssn) / df2);
+        return new TestOutcome(f, UpperTail.F(f, 1, df2), 1, df2);
+    }
+}

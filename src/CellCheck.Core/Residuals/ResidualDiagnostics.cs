@@ -1,0 +1,17 @@
+using CellCheck.Core.Models;
+
+namespace CellCheck.Core.Residuals;
+
+/// <summary>
+/// Case diagnostics of a fit in the partition's grouped order: leverage (hat values), externally studentized
+/// residuals and Cook's distance (NaN where leverage is one), with the model description, and, for a general
+/// linear model, its design matrix and fit.
+/// </summary>
+public sealed record ResidualDiagnostics(double[] Leverage, double[] StudentizedExternal, double[] CooksDistance, ModelInfo Model)
+{
+    /// <summary>The design matrix (null for the cell-means fast path).</summary>
+    public DesignMatrix? Design { get; init; }
+
+    /// <summary>The least-squares fit (null for the cell-means fast path).</summary>
+    public LinearFitResult? Fit { get; init; }
+}

@@ -1,0 +1,127 @@
+namespace CellCheck.Core.Models;
+
+/// <summary>
+/// Linear least squares by Householder QR with column pivoting (Businger &amp; Golub 1965, "Linear least squares
+/// solutions by Householder transformations", Numer. Math. 7, 269-276), in double precision, with a numerical rank
+/// decision, one step of iterative refinement and the usual case diagnostics.
+/// </summary>
+/// <remarks>
+/// <para>Each column of X is first divided by its Euclidean norm (equilibration, van der Sluis 1969, Numer. Math.
+/// 14, 14-23): the pivoting compares column norms, and unscaled polynomial columns such as x¹⁰ next to 1 would
+/// otherwise be chosen for their units, not for their information. Coefficients are divided by the same norms
+/// afterwards.</para>
+/// <para>Rank: the pivoted diagonal of R never increases; the columns from the first |R_kk| &lt; tolerance × |R₀₀|
+/// on are aliased. After scaling |R₀₀| = 1, and the default tolerance is 10·n·ε: the backward error of Householder
+/// QR grows like n·ε per column (Higham 2002, Accuracy and Stability of Numerical Algorithms, 2nd ed., Thm 19.4
+/// gives a bound of order n·p·ε; in practice the growth is close to √ of that), so a diagonal within ten times
+/// n·ε of zero cannot be told apart from an exact dependency, while a merely ill-conditioned design keeps its
+/// columns (the smallest scaled |R_kk| of NIST's Filip data, about 1e-8, is far above it). The estimable part is
+/// the basic solution on the first r pivoted columns.</para>
+/// <para>Refinement: the residual y − Xβ̂ is formed in double-double arithmetic (<see cref="CompensatedProducts"/>),
+/// its least-squares correction is solved with the same factorization and added to β̂, and the residuals are
+/// formed again (Golub &amp; Wilkinson 1966, "Note on the iterative refinement of least squares solution", Numer. Math.
+/// 9, 139-148). One step: it removes the error of the first solve in forming Qᵀy and back substitution; what remains
+/// is the conditioning of the data as stored in double.</para>
+/// </remarks>
+public static class LinearFit
+{
+    /// <summary>A leverage this close to 1 is taken as exactly 1: the row is fitted exactly, its residual is 0 and
+    /// its studentized residuals and Cook's distance are not usable (NaN).</summary>
+    public const double LeverageOneTolerance = 1e-10;
+
+    /// <summary>Unit roundoff ε = 2⁻⁵², the spacing of doubles at 1 (not <see cref="double.Epsilon"/>, the smallest subnormal).</summary>
+    private const double DoubleEpsilon = 2.220446049250313e-16;
+
+    /// <summary>Fits y ≈ Xβ by least squares. X is n × p and holds an intercept column only if the caller adds one.</summary>
+    /// <param name="x">The design, n × p, row i for observation i.</param>
+    /// <param name="y">The response, n values.</param>
+    /// <param name="rankTolerance">Relative tolerance for the rank decision (default 10·n·ε); in [0, 1).</param>
+    /// <exception cref="ArgumentException">Sizes disagree, X or y is empty, a value is not finite, or the tolerance is
+    /// out of range.</exception>
+    public static LinearFitResult Fit(double[,] x, double[] y, double? rankTolerance = null)
+    {
+        ArgumentNullException.ThrowIfNull(x);
+        ArgumentNullException.ThrowIfNull(y);
+        FitInput.Validate(x, y, rankTolerance);
+        int n = y.Length, p = x.GetLength(1);
+        var tolerance = rankTolerance ?? 10 * n * DoubleEpsilon;
+        var qr = PivotedQr.Factor(x, tolerance);
+        var r = qr.Rank;
+        var columns = qr.Pivot.AsSpan(0, r).ToArray();
+        var b = new double[r];
+        var fitted = new double[n];
+        var residuals = new double[n];
+        Solve(qr, y, b);
+        CompensatedProducts.FitAndResidual(x, y, columns, b, fitted, residuals);
+        Solve(qr, residuals, b, refine: true);
+        CompensatedProducts.FitAndResidual(x, y, columns, b, fitted, residuals);
+
+        var leverage = qr.Leverage();
+        for (var i = 0; i < n; i++)
+        {
+            if (Math.Abs(1 - leverage[i]) < LeverageOneTolerance)
+            {
+                leverage[i] = 1;
+                residuals[i] = 0;
+                fitted[i] = y[i];
+            }
+        }
+
+        var df = n - r;
+        var rss = CompensatedProducts.SumOfSquares(residuals);
+        var sigma = df > 0 ? Math.Sqrt(rss / df) : double.NaN;
+        var coefficients = new double[p];
+        var errors = new double[p];
+        Array.Fill(coefficients, double.NaN);
+        Array.Fill(errors, double.NaN);
+        var gram = qr.InverseGramDiagonal();
+        for (var k = 0; k < r; k++)
+        {
+            coefficients[columns[k]] = b[k];
+            errors[columns[k]] = sigma * Math.Sqrt(gram[k]) / qr.Scale[columns[k]];
+        }
+
+        var internalT = new double[n];
+        var externalT = new double[n];
+        var cooks = new double[n];
+        CaseDiagnostics.Compute(residuals, leverage, rss, df, r, internalT, externalT, cooks);
+        var kept = columns.Order().ToArray();
+        var aliased = Enumerable.Range(0, p).Except(kept).ToArray();
+        return new LinearFitResult(coefficients, errors, aliased, kept, r, tolerance, df, rss, sigma, fitted, residuals,
+            leverage, internalT, externalT, cooks);
+    }
+
+    /// <summary>The estimable columns of <paramref name="x"/> (<see cref="LinearFitResult.EstimableColumns"/>), in
+    /// their original order: a full-rank design with the same column space, for statistics that need one.</summary>
+    public static double[,] EstimableDesign(double[,] x, LinearFitResult fit)
+    {
+        ArgumentNullException.ThrowIfNull(x);
+        ArgumentNullException.ThrowIfNull(fit);
+        var n = x.GetLength(0);
+        var kept = fit.EstimableColumns;
+        var design = new double[n, kept.Length];
+        for (var i = 0; i < n; i++)
+        {
+            for (var j = 0; j < kept.Length; j++)
+            {
+                design[i, j] = x[i, kept[j]];
+            }
+        }
+
+        return design;
+    }
+
+    /// <summary>Solves the least-squares problem for the first r pivoted columns with right-hand side
+    /// <paramref name="rhs"/>; writes β (in the units of X) to <paramref name="b"/>, or adds it when refining.</summary>
+    private static void Solve(PivotedQr qr, double[] rhs, double[] b, bool refine = false)
+    {
+        var c = (double[])rhs.Clone();
+        qr.ApplyQt(c);
+        qr.SolveUpper(c);
+        for (var k = 0; k < b.Length; k++)
+        {
+            var step = c[k] / qr.Scale[qr.Pivot[k]];
+            b[k] = refine ? b[k] + step : step;
+        }
+    }
+}

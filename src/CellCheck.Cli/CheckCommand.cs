@@ -13,7 +13,7 @@ internal static class CheckCommand
     {
         var design = new Argument<string>("design") { Description = "The design file (YAML) naming the data file, factors and responses." };
         var json = new Option<string?>("--json") { Description = "Write the JSON report to FILE.", HelpName = "FILE" };
-        var outDir = new Option<string?>("--out") { Description = "Write every report (report.json) into folder DIR, creating it if needed.", HelpName = "DIR" };
+        var outDir = new Option<string?>("--out") { Description = "Write every report (report.json, diagnostics.csv) into folder DIR, creating it if needed.", HelpName = "DIR" };
         var adjust = new Option<string?>("--adjust") { Description = "Adjustment of within-cell p-values across cells: holm (default), bh or none.", HelpName = "METHOD" };
         adjust.AcceptOnlyFromAmong("holm", "bh", "none");
         var alpha = new Option<double?>("--alpha") { Description = "Significance level (overrides the design file; default 0.05).", HelpName = "A" };

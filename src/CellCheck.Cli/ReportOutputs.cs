@@ -20,6 +20,18 @@ internal static class ReportOutputs
         }
 
         string[] inputs = [run.Design.Path, run.Design.DataPath];
+        if (outDir is not null)
+        {
+            var csv = Path.Combine(outDir, "diagnostics.csv");
+            var problem = AtomicFile.Write(csv, inputs, s => DiagnosticsCsvWriter.Write(run.Report, s));
+            if (problem is not null)
+            {
+                return ProblemPrinter.Print([problem], error);
+            }
+
+            output.WriteLine("Wrote " + csv);
+        }
+
         foreach (var target in targets)
         {
             var problem = AtomicFile.Write(target, inputs, s => JsonReportWriter.Write(run.Report, s, ToolVersion.Text));

@@ -25,14 +25,15 @@ public static class CheckRun
         }
 
         var options = new AnalysisOptions(alpha ?? file.Alpha, adjust ?? file.Adjust);
+        var spec = ModelSpecs.From(file);
         var responses = new List<ResponseReport>();
         for (var r = 0; r < data.Value!.Responses.Count; r++)
         {
-            responses.Add(ResponseAnalyzer.Analyze(data.Value, r, options));
+            responses.Add(ResponseAnalyzer.Analyze(data.Value, r, options, spec));
         }
 
         var summary = new DesignSummary(designPath, file.DataText, file.Name, file.Factors.Select(f => f.Name).ToArray(),
-            file.RunOrder?.Column, options.Alpha, AdjustName(options.Adjust));
+            file.RunOrder?.Column, options.Alpha, AdjustName(options.Adjust)) { Blocks = file.Blocks.Select(b => b.Name).ToArray() };
         return LoadResult<CheckRunResult>.Success(new CheckRunResult(file, new CheckReport(summary, responses)));
     }
 

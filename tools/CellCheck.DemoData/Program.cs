@@ -9,7 +9,8 @@ internal static class Program
         Directory.CreateDirectory(folder);
         File.WriteAllText(Path.Combine(folder, "coating-cure.csv"), CoatingCure.Csv());
         File.WriteAllText(Path.Combine(folder, "assay-lab.csv"), AssayLab.Csv());
-        Console.WriteLine("Wrote coating-cure.csv and assay-lab.csv to " + folder);
+        File.WriteAllText(Path.Combine(folder, "field-trial.csv"), FieldTrial.Csv());
+        Console.WriteLine("Wrote coating-cure.csv, assay-lab.csv and field-trial.csv to " + folder);
         return 0;
     }
 }

@@ -8,4 +8,8 @@ public sealed record DesignSummary(
     IReadOnlyList<string> Factors,
     string? RunOrder,
     double Alpha,
-    string Adjust);
+    string Adjust)
+{
+    /// <summary>Block (nuisance factor) names.</summary>
+    public IReadOnlyList<string> Blocks { get; init; } = [];
+}

@@ -20,7 +20,9 @@ internal static class ModelChecks
         if (fit is not null && diagnostics.Design is not null)
         {
             var estimable = LinearFit.EstimableDesign(diagnostics.Design.X, fit);
-            checks.Add(spec.IsAdditive
+            // Tukey's test needs fitted values that are not already a full cell-means fit: an additive model, or
+            // treatments (with any interactions) plus additive blocks
+            checks.Add(spec.IsAdditive || blocks.Count > 0
                 ? CheckResults.From(CheckNames.TukeyNonadditivity, TukeyNonadditivity.Test(estimable, fit), alpha)
                 : CheckResults.NotTestable(CheckNames.TukeyNonadditivity, NotTestableReason.NotAdditive));
             checks.Add(CheckResults.From(CheckNames.LackOfFit, LackOfFit.Test(fit, partition.Values.Values, Settings(partition, blocks)), alpha));

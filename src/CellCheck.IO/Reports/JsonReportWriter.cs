@@ -54,13 +54,8 @@ public static class JsonReportWriter
             w.WriteString("name", design.Name);
         }
 
-        w.WriteStartArray("factors");
-        foreach (var f in design.Factors)
-        {
-            w.WriteStringValue(f);
-        }
-
-        w.WriteEndArray();
+        Strings(w, "factors", design.Factors);
+        Strings(w, "blocks", design.Blocks);
         if (design.RunOrder is null)
         {
             w.WriteNull("run_order");

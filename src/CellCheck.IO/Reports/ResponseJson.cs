@@ -50,6 +50,7 @@ internal static class ResponseJson
         }
 
         w.WriteEndArray();
+        ModelJson.Write(w, r.Model);
         WritePooled(w, r.Pooled);
         WriteSpread(w, r, factors);
         VerdictJson.Write(w, r.Verdict);
@@ -121,7 +122,7 @@ internal static class ResponseJson
         }
     }
 
-    private static void Checks(Utf8JsonWriter w, IReadOnlyList<CheckResult> checks)
+    internal static void Checks(Utf8JsonWriter w, IReadOnlyList<CheckResult> checks)
     {
         w.WriteStartArray("checks");
         foreach (var k in checks)

@@ -19,6 +19,8 @@ internal static class ResponseSection
         console.WriteLine();
         AssumptionTable.Write(console, r.Verdict);
         console.WriteLine();
+        ModelSection.Write(console, r.Model);
+        console.WriteLine();
         var c = r.Census;
         var replicates = c.MinReplicates == c.MaxReplicates ? NumberText.Count(c.MinReplicates) : NumberText.Count(c.MinReplicates) + " to " + NumberText.Count(c.MaxReplicates);
         console.Write(new Text($"Census: {c.Cells} cells of {NumberText.Value(c.Combinations, 12)} combinations, {replicates} values per cell, "

@@ -29,6 +29,8 @@ public static class LinearFit
     /// its studentized residuals and Cook's distance are not usable (NaN).</summary>
     public const double LeverageOneTolerance = 1e-10;
 
+    internal static int RefinementSteps { get; set; } = 1;
+
     /// <summary>Unit roundoff ε = 2⁻⁵², the spacing of doubles at 1 (not <see cref="double.Epsilon"/>, the smallest subnormal).</summary>
     private const double DoubleEpsilon = 2.220446049250313e-16;
 
@@ -53,7 +55,7 @@ public static class LinearFit
         var residuals = new double[n];
         Solve(qr, y, b);
         CompensatedProducts.FitAndResidual(x, y, columns, b, fitted, residuals);
-        Solve(qr, residuals, b, refine: true);
+        AugmentedRefinement.Refine(qr, x, y, columns, b, residuals, RefinementSteps);
         CompensatedProducts.FitAndResidual(x, y, columns, b, fitted, residuals);
 
         var leverage = qr.Leverage();

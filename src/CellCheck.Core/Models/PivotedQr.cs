@@ -126,6 +126,21 @@ internal sealed class PivotedQr
         }
     }
 
+    /// <summary>Solves R₁₁ᵀ h = g[0..Rank) by forward substitution, in place.</summary>
+    public void SolveUpperTransposed(Span<double> g)
+    {
+        for (var i = 0; i < Rank; i++)
+        {
+            var s = g[i];
+            for (var j = 0; j < i; j++)
+            {
+                s -= R(j, i) * g[j];
+            }
+
+            g[i] = s / R(i, i);
+        }
+    }
+
     /// <summary>Leverages h_ii = Σ_k Q[i, k]² over the first Rank columns of Q (the thin Q of the kept columns).</summary>
     public double[] Leverage()
     {

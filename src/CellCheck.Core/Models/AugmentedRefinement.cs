@@ -10,40 +10,37 @@ namespace CellCheck.Core.Models;
 /// </summary>
 internal static class AugmentedRefinement
 {
-    /// <summary>Runs <paramref name="steps"/> corrections on b (in the units of X, one entry per kept pivoted
-    /// column) and on r (the residual vector, initially y − Xb).</summary>
-    public static void Refine(PivotedQr qr, double[,] x, double[] y, int[] columns, double[] b, double[] r, int steps)
+    /// <summary>One correction of b (in the units of X, one entry per kept pivoted column) and of r (the residual
+    /// vector, initially y − Xb), both in place.</summary>
+    public static void Refine(PivotedQr qr, double[,] x, double[] y, int[] columns, double[] b, double[] r)
     {
         var rank = columns.Length;
         var f = new double[y.Length];
         var g = new double[rank];
-        for (var step = 0; step < steps; step++)
+        CompensatedProducts.AugmentedResidual(x, y, columns, b, r, f);
+        CompensatedProducts.TransposedProduct(x, columns, r, g);
+        for (var k = 0; k < rank; k++)
         {
-            CompensatedProducts.AugmentedResidual(x, y, columns, b, r, f);
-            CompensatedProducts.TransposedProduct(x, columns, r, g);
-            for (var k = 0; k < rank; k++)
-            {
-                g[k] = -g[k] / qr.Scale[columns[k]];
-            }
+            g[k] = -g[k] / qr.Scale[columns[k]];
+        }
 
-            qr.SolveUpperTransposed(g);
-            qr.ApplyQt(f);
-            for (var k = 0; k < rank; k++)
-            {
-                (f[k], g[k]) = (g[k], f[k] - g[k]);
-            }
+        qr.SolveUpperTransposed(g);
+        qr.ApplyQt(f);
+        for (var k = 0; k < rank; k++)
+        {
+            (f[k], g[k]) = (g[k], f[k] - g[k]);
+        }
 
-            qr.SolveUpper(g);
-            qr.ApplyQ(f);
-            for (var k = 0; k < rank; k++)
-            {
-                b[k] += g[k] / qr.Scale[columns[k]];
-            }
+        qr.SolveUpper(g);
+        qr.ApplyQ(f);
+        for (var k = 0; k < rank; k++)
+        {
+            b[k] += g[k] / qr.Scale[columns[k]];
+        }
 
-            for (var i = 0; i < r.Length; i++)
-            {
-                r[i] += f[i];
-            }
+        for (var i = 0; i < r.Length; i++)
+        {
+            r[i] += f[i];
         }
     }
 }

@@ -104,10 +104,16 @@ public static class LinearFit
 
     /// <summary>The estimable columns of <paramref name="x"/> (<see cref="LinearFitResult.EstimableColumns"/>), in
     /// their original order: a full-rank design with the same column space, for statistics that need one.</summary>
+    /// <exception cref="ArgumentException">X does not have the fit's number of columns.</exception>
     public static double[,] EstimableDesign(double[,] x, LinearFitResult fit)
     {
         ArgumentNullException.ThrowIfNull(x);
         ArgumentNullException.ThrowIfNull(fit);
+        if (x.GetLength(1) != fit.Coefficients.Length)
+        {
+            throw new ArgumentException($"X has {x.GetLength(1)} columns but the fit has {fit.Coefficients.Length}.", nameof(x));
+        }
+
         var n = x.GetLength(0);
         var kept = fit.EstimableColumns;
         var design = new double[n, kept.Length];

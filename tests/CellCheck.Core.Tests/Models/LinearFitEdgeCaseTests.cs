@@ -44,6 +44,19 @@ public sealed class LinearFitEdgeCaseTests
     }
 
     [Fact]
+    public void All_zero_design_aliases_every_column_and_leaves_y_as_the_residual()
+    {
+        var fit = LinearFit.Fit(new double[3, 2], [1.0, -2.0, 2.0]);
+        Assert.Equal(0, fit.Rank);
+        Assert.Equal([0, 1], fit.Aliased);
+        Assert.Empty(fit.EstimableColumns);
+        Assert.Equal([1.0, -2.0, 2.0], fit.Residuals);
+        Assert.Equal(9.0, fit.ResidualSumOfSquares);
+        Assert.Equal(Math.Sqrt(3.0), fit.ResidualSd);
+        Assert.All(fit.Coefficients, c => Assert.True(double.IsNaN(c)));
+    }
+
+    [Fact]
     public void One_residual_degree_of_freedom_has_no_external_studentized_residual()
     {
         // df = 1: the deleted-case variance would have 0 degrees of freedom.

@@ -32,6 +32,43 @@ internal static class CompensatedProducts
         }
     }
 
+    /// <summary>f[i] = y[i] − r[i] − Σ_j x[i, columns[j]] b[j], accumulated in double-double and rounded once.</summary>
+    public static void AugmentedResidual(double[,] x, double[] y, ReadOnlySpan<int> columns, ReadOnlySpan<double> b,
+        ReadOnlySpan<double> r, Span<double> f)
+    {
+        for (var i = 0; i < y.Length; i++)
+        {
+            var (hi, lo) = TwoSum(y[i], -r[i]);
+            for (var j = 0; j < columns.Length; j++)
+            {
+                var product = x[i, columns[j]] * b[j];
+                var productError = Math.FusedMultiplyAdd(x[i, columns[j]], b[j], -product);
+                (hi, var sumError) = TwoSum(hi, -product);
+                lo += sumError - productError;
+            }
+
+            f[i] = hi + lo;
+        }
+    }
+
+    /// <summary>g[j] = Σ_i x[i, columns[j]] r[i], accumulated in double-double and rounded once.</summary>
+    public static void TransposedProduct(double[,] x, ReadOnlySpan<int> columns, ReadOnlySpan<double> r, Span<double> g)
+    {
+        for (var j = 0; j < columns.Length; j++)
+        {
+            double hi = 0, lo = 0;
+            for (var i = 0; i < r.Length; i++)
+            {
+                var product = x[i, columns[j]] * r[i];
+                var productError = Math.FusedMultiplyAdd(x[i, columns[j]], r[i], -product);
+                (hi, var sumError) = TwoSum(hi, product);
+                lo += sumError + productError;
+            }
+
+            g[j] = hi + lo;
+        }
+    }
+
     /// <summary>Σ v² with the same error-free transformations (Ogita, Rump &amp; Oishi 2005, Algorithm Dot2).</summary>
     public static double SumOfSquares(ReadOnlySpan<double> v)
     {

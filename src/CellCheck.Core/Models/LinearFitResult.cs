@@ -22,8 +22,10 @@ namespace CellCheck.Core.Models;
 /// where within <see cref="LinearFit.LeverageOneTolerance"/> of 1.</param>
 /// <param name="StudentizedInternal">eᵢ / (σ̂ √(1 − hᵢᵢ)); NaN where the leverage is 1 or σ̂ is NaN or 0.</param>
 /// <param name="StudentizedExternal">eᵢ / (σ̂₍ᵢ₎ √(1 − hᵢᵢ)) with σ̂₍ᵢ₎² = (RSS − eᵢ²/(1 − hᵢᵢ)) / (n − r − 1), the
-/// residual variance with row i deleted; NaN where the leverage is 1 or n − r &lt; 2.</param>
-/// <param name="CooksDistance">tᵢ² hᵢᵢ / (r (1 − hᵢᵢ)) with tᵢ the internally studentized residual; NaN where tᵢ is.</param>
+/// residual variance with row i deleted; NaN where the leverage is 1, σ̂ is NaN or 0, or n − r &lt; 2; ±∞ where the
+/// deleted-case variance is 0 (row i carries the whole RSS).</param>
+/// <param name="CooksDistance">tᵢ² hᵢᵢ / (r (1 − hᵢᵢ)) with tᵢ the internally studentized residual; NaN where tᵢ is
+/// or r = 0.</param>
 public sealed record LinearFitResult(
     double[] Coefficients,
     double[] StandardErrors,

@@ -8,9 +8,10 @@ namespace CellCheck.Core.Models;
 /// The copy is held column-major and factored in place: R on and above the diagonal, the Householder vectors
 /// (with an implicit leading 1, as in LAPACK's dgeqp3) below it. At step k the column with the largest remaining norm
 /// over rows k..n−1 is moved to position k. Those partial norms are recomputed at every step instead of being
-/// downdated as in the original algorithm: about a third more work, but free of the cancellation that downdating
-/// suffers once a column is nearly in the span of the chosen ones (Drmač &amp; Bujanović 2008, SIAM J. Matrix Anal.
-/// Appl. 29, 1066-1079). Norms within a relative 1e-10 of the largest count as ties and go to the column that came
+/// downdated as in the original algorithm: about half as much work again as the factorization, but free of the
+/// cancellation that downdating suffers once a column is nearly in the span of the chosen ones (Drmač &amp; Bujanović
+/// 2008, "On the failure of rank-revealing QR factorization software - a case study", ACM Trans. Math. Softw. 35,
+/// article 12). Norms within a relative 1e-10 of the largest count as ties and go to the column that came
 /// first in X, so that balanced designs (whose 0/1 columns have equal norms up to rounding) pivot reproducibly and
 /// exact duplicates alias the later copy. Factoring stops at the first step whose largest remaining norm is below
 /// tolerance × |R₀₀|; because the pivoted diagonal never increases, the rank is that step's index.
@@ -126,47 +127,18 @@ internal sealed class PivotedQr
         }
     }
 
-    /// <summary>Leverages h_ii = Σ_k Q[i, k]² over the first Rank columns of Q (the thin Q of the kept columns).</summary>
-    public double[] Leverage()
+    /// <summary>Solves R₁₁ᵀ h = g[0..Rank) by forward substitution, in place.</summary>
+    public void SolveUpperTransposed(Span<double> g)
     {
-        var h = new double[Rows];
-        var q = new double[Rows];
-        for (var c = 0; c < Rank; c++)
+        for (var i = 0; i < Rank; i++)
         {
-            Array.Clear(q);
-            q[c] = 1;
-            ApplyQ(q);
-            for (var i = 0; i < Rows; i++)
+            var s = g[i];
+            for (var j = 0; j < i; j++)
             {
-                h[i] += q[i] * q[i];
+                s -= R(j, i) * g[j];
             }
+
+            g[i] = s / R(i, i);
         }
-
-        return h;
-    }
-
-    /// <summary>The diagonal of (R₁₁ᵀR₁₁)⁻¹ = R₁₁⁻¹R₁₁⁻ᵀ: the squared row norms of R₁₁⁻¹, built one column at a time.</summary>
-    public double[] InverseGramDiagonal()
-    {
-        var d = new double[Rank];
-        var w = new double[Rank];
-        for (var c = 0; c < Rank; c++)
-        {
-            Array.Clear(w);
-            w[c] = 1;
-            for (var i = c; i >= 0; i--)
-            {
-                var s = w[i];
-                for (var j = i + 1; j <= c; j++)
-                {
-                    s -= R(i, j) * w[j];
-                }
-
-                w[i] = s / R(i, i);
-                d[i] += w[i] * w[i];
-            }
-        }
-
-        return d;
     }
 }

@@ -27,6 +27,26 @@ public sealed class CheckCommandTests
     }
 
     [Fact]
+    public void The_field_trial_demo_runs_model_based_checks_and_matches_its_golden_file()
+    {
+        var folder = Path.Combine(Path.GetTempPath(), "cellcheck-cli-" + Guid.NewGuid().ToString("N"));
+        try
+        {
+            var (code, output, _) = CliRunner.Run("check", CliRunner.Design("field-trial.yaml"), "--out", folder);
+            Assert.Equal(0, code);
+            Assert.Contains("one row per block", output, StringComparison.Ordinal);
+            GoldenFile.Match("field-trial.txt", CliRunner.Portable(output.Replace(folder, "OUT", StringComparison.Ordinal)));
+            var csv = File.ReadAllLines(Path.Combine(folder, "diagnostics.csv"));
+            Assert.Equal("response,line,nitrogen,variety,fitted,residual,studentized,studentized_external,leverage,cooks_distance", csv[0]);
+            Assert.Equal(25, csv.Length);
+        }
+        finally
+        {
+            Directory.Delete(folder, recursive: true);
+        }
+    }
+
+    [Fact]
     public void The_json_report_matches_its_golden_file_and_the_schema_keys()
     {
         var folder = Path.Combine(Path.GetTempPath(), "cellcheck-cli-" + Guid.NewGuid().ToString("N"));

@@ -67,4 +67,23 @@ public sealed class ModelReferenceTests
         Assert.Equal("cell-means", r.Model.Info.Name);
         Assert.Equal(CheckStatus.NotTestable, Check(r, CheckNames.LackOfFit).Status);
     }
+
+    [Fact]
+    public void An_unreplicated_two_level_factorial_is_judged_by_its_effects_with_lenth_margins()
+    {
+        // R 4.2.2 on the invented 2^4 sample: e <- 2 * coef(lm(y ~ A*B*C*D, X))[-1] with X = expand.grid(+-1);
+        // s0 <- 1.5 * median(abs(e)); pse <- 1.5 * median(abs(e)[abs(e) < 2.5 * s0]) = 4.5;
+        // qt(0.975, 15/3) * pse = 11.5676182603634; qt((1 + 0.95^(1/15)) / 2, 15/3) * pse = 23.4839306790898 (Lenth 1989 formulas)
+        var r = Run("unreplicated-2x4.yaml");
+        var e = r.Model.Effects!;
+        Assert.Equal(0, r.Model.Info.ResidualDf);
+        Assert.Equal(4.5, e.PseudoStandardError, 1e-12);
+        Near(11.5676182603634, e.MarginOfError, 1e-9);
+        Near(23.4839306790898, e.SimultaneousMargin, 1e-9);
+        var effects = r.Model.EffectNames.Zip(e.Effects).ToDictionary(p => p.First, p => p.Second);
+        Assert.Equal(20.0, effects["a"], 1e-9);
+        Assert.Equal(-14.5, effects["a*c"], 1e-9);
+        Assert.Equal(11.5, effects["a*d"], 1e-9);
+        Assert.Contains(r.Verdict.Findings, f => f.Contains("Lenth", StringComparison.Ordinal) && f.Contains("a 20", StringComparison.Ordinal));
+    }
 }

@@ -17,15 +17,20 @@ internal static class ModelChecks
         var notes = new List<string>();
         var checks = new List<CheckResult>();
         var fit = diagnostics.Fit;
-        if (fit is not null && diagnostics.Design is not null)
+        if (fit is not null && diagnostics.Estimable is { } estimable)
         {
-            var estimable = LinearFit.EstimableDesign(diagnostics.Design.X, fit);
             // Tukey's test needs fitted values that are not already a full cell-means fit: an additive model, or
             // treatments (with any interactions) plus additive blocks
             checks.Add(spec.IsAdditive || blocks.Count > 0
                 ? CheckResults.From(CheckNames.TukeyNonadditivity, TukeyNonadditivity.Test(estimable, fit), alpha)
                 : CheckResults.NotTestable(CheckNames.TukeyNonadditivity, NotTestableReason.NotAdditive));
             checks.Add(CheckResults.From(CheckNames.LackOfFit, LackOfFit.Test(fit, partition.Values.Values, Settings(partition, blocks)), alpha));
+        }
+        else
+        {
+            // the cell-means model: fitted values are the cell means, so neither test has anything to test
+            checks.Add(CheckResults.NotTestable(CheckNames.TukeyNonadditivity, NotTestableReason.NotAdditive));
+            checks.Add(CheckResults.NotTestable(CheckNames.LackOfFit, NotTestableReason.SaturatedModel));
         }
 
         var screen = OutlierScreen.Screen(diagnostics.StudentizedExternal, residuals.ResidualDf, out var screened);

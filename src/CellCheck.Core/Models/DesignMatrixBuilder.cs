@@ -3,9 +3,10 @@ using CellCheck.Core.Data;
 namespace CellCheck.Core.Models;
 
 /// <summary>
-/// Builds the design matrix of a model: an intercept; for each term the products of its factors' columns, where a
-/// categorical factor contributes treatment-contrast indicators (every level present in the rows but the first) and
-/// a numeric factor one column of its centred values (a linear term); then each block's indicators.
+/// Builds the design matrix of a model: an intercept; each block's indicators; then for each term the products of
+/// its factors' columns, where a categorical factor contributes treatment-contrast indicators (every level present in
+/// the rows but the first) and a numeric factor one column of its centred values (a linear term). Blocks come first
+/// so that a treatment contrast confounded with blocks is the one found aliased (<see cref="OrderedRank"/>).
 /// </summary>
 public static class DesignMatrixBuilder
 {
@@ -16,12 +17,17 @@ public static class DesignMatrixBuilder
         ArgumentNullException.ThrowIfNull(spec);
         ArgumentNullException.ThrowIfNull(rows);
         var columns = new List<(string Name, int Term, double[] Values)> { ("(intercept)", -1, Enumerable.Repeat(1.0, rows.Length).ToArray()) };
-        var termNames = new List<string>();
-        var factorColumns = factors.Select(f => Components(f, rows)).ToArray();
-        foreach (var term in spec.Terms)
+        var termNames = spec.Terms.Select(t => t.Name(factors)).Concat(blocks.Select(b => b.Name)).ToList();
+        for (var b = 0; b < blocks.Count; b++)
         {
-            var termIndex = termNames.Count;
-            termNames.Add(term.Name(factors));
+            var termIndex = spec.Terms.Count + b;
+            columns.AddRange(Components(blocks[b], rows, forceCategorical: true).Select(c => (c.Name, termIndex, c.Values)));
+        }
+
+        var factorColumns = factors.Select(f => Components(f, rows)).ToArray();
+        for (var termIndex = 0; termIndex < spec.Terms.Count; termIndex++)
+        {
+            var term = spec.Terms[termIndex];
             IEnumerable<(string Name, double[] Values)> products = [(string.Empty, Enumerable.Repeat(1.0, rows.Length).ToArray())];
             foreach (var f in term.Factors)
             {
@@ -29,13 +35,6 @@ public static class DesignMatrixBuilder
             }
 
             columns.AddRange(products.Select(p => (p.Name, termIndex, p.Values)));
-        }
-
-        foreach (var block in blocks)
-        {
-            var termIndex = termNames.Count;
-            termNames.Add(block.Name);
-            columns.AddRange(Components(block, rows, forceCategorical: true).Select(c => (c.Name, termIndex, c.Values)));
         }
 
         var x = new double[rows.Length, columns.Count];

@@ -7,8 +7,8 @@ namespace CellCheck.Core.Residuals;
 
 /// <summary>
 /// Residuals of a declared linear model (terms among the factors, additive blocks, numeric factors as linear terms),
-/// fitted by least squares with a pivoted QR (<see cref="LinearFit"/>). Aliased columns are reported and the
-/// estimable part is fitted. Rows are taken in the partition's grouped order, so residuals group by cell.
+/// fitted by least squares with a pivoted QR (<see cref="LinearFit"/>). Aliased columns are decided in term order
+/// (<see cref="OrderedRank"/>), reported, and the estimable part is fitted. Rows are taken in the partition's grouped order, so residuals group by cell.
 /// </summary>
 public sealed class ModelResiduals(IReadOnlyList<FactorColumn> blocks, ModelSpec spec, string name) : IResidualSource
 {
@@ -19,15 +19,32 @@ public sealed class ModelResiduals(IReadOnlyList<FactorColumn> blocks, ModelSpec
         ArgumentNullException.ThrowIfNull(partition);
         var design = DesignMatrixBuilder.Build(partition.Factors, blocks, spec, partition.RowOrder);
         var y = partition.Values.Values;
-        var fit = LinearFit.Fit(design.X, y);
-        var aliasedColumns = fit.Aliased.Select(c => design.Columns[c]).ToArray();
-        var aliasedTerms = fit.Aliased.Select(c => design.ColumnTerm[c]).Where(t => t >= 0).Distinct().Select(t => design.Terms[t]).ToArray();
+        var kept = OrderedRank.KeptColumns(design.X);
+        var aliased = Enumerable.Range(0, design.ColumnCount).Except(kept).ToArray();
+        var estimable = Columns(design.X, kept);
+        var fit = LinearFit.Fit(estimable, y);
+        var aliasedColumns = aliased.Select(c => design.Columns[c]).ToArray();
+        var aliasedTerms = aliased.Select(c => design.ColumnTerm[c]).Where(t => t >= 0).Distinct().Select(t => design.Terms[t]).ToArray();
         var info = new ModelInfo(name, design.Terms, fit.Rank, design.ColumnCount, fit.ResidualDf, aliasedColumns, aliasedTerms);
-        var estimable = LinearFit.EstimableDesign(design.X, fit);
+        estimable = LinearFit.EstimableDesign(estimable, fit);
         var plan = new ModelPlan(estimable, partition.Values.Starts, PlanKey.Of(estimable, partition.Values.Starts));
         return new ResidualSet(name, fit.Residuals, fit.Fitted, fit.StudentizedInternal, fit.ResidualSd, fit.ResidualDf, plan)
         {
-            Diagnostics = new ResidualDiagnostics(fit.Leverage, fit.StudentizedExternal, fit.CooksDistance, info) { Design = design, Fit = fit },
+            Diagnostics = new ResidualDiagnostics(fit.Leverage, fit.StudentizedExternal, fit.CooksDistance, info) { Design = design, Fit = fit, Estimable = estimable },
         };
+    }
+
+    private static double[,] Columns(double[,] x, int[] kept)
+    {
+        var result = new double[x.GetLength(0), kept.Length];
+        for (var i = 0; i < x.GetLength(0); i++)
+        {
+            for (var k = 0; k < kept.Length; k++)
+            {
+                result[i, k] = x[i, kept[k]];
+            }
+        }
+
+        return result;
     }
 }

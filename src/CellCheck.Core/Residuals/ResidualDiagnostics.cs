@@ -12,6 +12,9 @@ public sealed record ResidualDiagnostics(double[] Leverage, double[] Studentized
     /// <summary>The design matrix (null for the cell-means fast path).</summary>
     public DesignMatrix? Design { get; init; }
 
-    /// <summary>The least-squares fit (null for the cell-means fast path).</summary>
+    /// <summary>The least-squares fit on the estimable columns (null for the cell-means fast path).</summary>
     public LinearFitResult? Fit { get; init; }
+
+    /// <summary>The full-rank design matrix actually fitted: the estimable columns in order (null for cell means).</summary>
+    public double[,]? Estimable { get; init; }
 }

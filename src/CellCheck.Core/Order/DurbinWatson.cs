@@ -10,9 +10,11 @@ namespace CellCheck.Core.Order;
 /// <remarks>
 /// <para>Exact p (n ≤ exactLimit): P(d ≤ d_obs) = P(Σ (λ_i − d_obs) z_i² ≤ 0) over the n − p eigenvalues λ_i of
 /// M A M (see <see cref="DurbinWatsonDistribution"/>), integrated by Imhof's (1961) formula with the trapezoidal
-/// rule on a logarithmic scale (see <see cref="QuadraticFormCdf"/>); the absolute error is below 1e-10 (typically
-/// about 1e-12). The eigenvalues cost O(n³) time and n²/2 doubles: about 0.3 s at n = 800 and 1.5 s at n = 1500
-/// on the development machine.</para>
+/// rule on a logarithmic scale (see <see cref="QuadraticFormCdf"/>), with an absolute error bound below 1e-10
+/// (at most 6.6e-14 on every design in the tests, whose deviations from R's two independent integrations are at most 3e-14).
+/// The eigenvalues cost O(n³) time and n²/2 doubles: on the 2-core development machine (Release build) about
+/// 0.1 s at n = 400, 0.8 s at n = 1000, 1.3 s at n = 1500 and 11 s at n = 3000, the default limit; the
+/// integration itself takes milliseconds.</para>
 /// <para>Approximate p (n &gt; exactLimit): d is referred to the normal distribution with its exact mean and
 /// variance for this design, computed from traces in O(np²) time (Durbin &amp; Watson 1971, Biometrika 58, 1-19,
 /// discuss this and better-fitting approximations; the normal one errs by O(1/√(n − p)) in the tails).</para>

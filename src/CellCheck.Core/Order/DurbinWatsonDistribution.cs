@@ -15,8 +15,9 @@ namespace CellCheck.Core.Order;
 /// E[(εᵀBε)²] = 2 tr B² + (tr B)² for B = MAM this gives E[d] = tr(MA)/m and
 /// Var[d] = 2[m tr((MA)²) − tr(MA)²] / (m²(m + 2)): Durbin &amp; Watson's (1950) mean P/(n − k) and variance
 /// 2(Q − P·E[d]) / ((n − k)(n − k + 2)) with P = tr(MA), Q = tr((MA)²) (see also Durbin &amp; Watson 1971, "Testing
-/// for serial correlation in least squares regression III", Biometrika 58, 1-19). E[d] approaches 2 only as n − p
-/// grows; with few residual degrees of freedom it can be well above 2.
+/// for serial correlation in least squares regression III", Biometrika 58, 1-19). E[d] is 2 for an intercept
+/// alone but not in general: 1.864 for the 16-run 2⁴ factorial with four main effects in the tests, 2.015 for 400
+/// runs in four blocks of consecutive runs.
 /// </remarks>
 internal sealed class DurbinWatsonDistribution
 {

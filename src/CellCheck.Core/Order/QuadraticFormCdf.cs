@@ -14,14 +14,15 @@ namespace CellCheck.Core.Order;
 /// the strip (Trefethen &amp; Weideman 2014, "The exponentially convergent trapezoidal rule", SIAM Review 56, 385-458).
 /// The step starts at ½ and is halved, reusing the nodes, until two successive sums differ by at most 1e-12 with
 /// h ≤ ¼; as the error shrinks geometrically the finer sum is far closer than that difference, which is reported as
-/// the discretization error. Near-equal or repeated weights, which slow Pan's and other real-axis formulas, do not
-/// narrow the strip.</para>
+/// the discretization error. Near-equal or repeated weights do not narrow the strip, so they need no special care
+/// (formulas that integrate along the real axis between consecutive weights do need it).</para>
 /// <para>Truncation. Left: |g(x)| ≤ |θ(eˣ)| ≤ ½ eˣ Σ|c_j|, so the integral below x_L is at most ½ e^{x_L} Σ|c_j|.
 /// Right (Imhof's bound): 1/ρ(u) ≤ Π_{j≤k} (|c_(j)| u)^{−½} for the k largest |c_j|, so the integral beyond U is at
 /// most (2/k) Π_{j≤k} (|c_(j)| U)^{−½}; U is doubled until the least of these over k is small. Both tails are held below
 /// 1e-13, so the truncation adds at most 2e-13/π to the probability.</para>
-/// <para>Accuracy achieved: the returned bound (discretization estimate plus truncation bounds, divided by π) is
-/// typically below 1e-12; rounding in the sums over weights and nodes adds about 1e-14. Zero weights are dropped.</para>
+/// <para>Accuracy achieved: the returned bound (discretization estimate plus truncation bounds, divided by π) was
+/// at most 6.6e-14 on every case in the tests, where closed forms and R's independent integrations agree within 3e-14;
+/// rounding in the sums over weights and nodes adds about 1e-14. Zero weights are dropped.</para>
 /// </remarks>
 internal static class QuadraticFormCdf
 {

@@ -3,10 +3,12 @@ namespace CellCheck.Core.Statistics;
 /// <summary>Stable reason codes for a test that cannot be computed. Codes never change meaning across versions.</summary>
 public static class NotTestableReason
 {
-    /// <summary>Fewer values than the method needs (Shapiro-Wilk 3, Anderson-Darling 8, D'Agostino-Pearson 8).</summary>
+    /// <summary>Fewer values than the method needs (Shapiro-Wilk 3, Anderson-Darling 8, D'Agostino-Pearson 8;
+    /// Durbin-Watson p + 2 for p design columns; order trend 3; runs test 3 off the median with both sides present).</summary>
     public const string TooFewValues = "too-few-values";
 
-    /// <summary>All values identical (or residuals all zero): no spread to standardise by.</summary>
+    /// <summary>All values identical (or residuals all zero): no spread to standardise by. The order trend also
+    /// reports it when every run-order value is the same.</summary>
     public const string ZeroSpread = "zero-spread";
 
     /// <summary>More values than the p-value approximation is valid for (Shapiro-Wilk above 5000).</summary>

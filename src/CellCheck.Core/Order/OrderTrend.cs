@@ -1,0 +1,82 @@
+using CellCheck.Core.Statistics;
+using MathNet.Numerics.Distributions;
+
+namespace CellCheck.Core.Order;
+
+/// <summary>
+/// Drift over run order: the least-squares slope of the residuals on run position 1..n (or on given run-order
+/// values such as times), with t = slope / SE on n − 2 degrees of freedom and a two-sided Student t p-value
+/// (simple linear regression, e.g. Draper &amp; Smith 1998, Applied Regression Analysis, 3rd ed., ch. 1).
+/// </summary>
+/// <remarks>
+/// The residuals of a model fitted with its own parameters have fewer than n degrees of freedom, so the t reference
+/// is approximate unless the design is orthogonal to run order; it is meant as a screen for drift. Sums are taken
+/// about the means (two-pass). Not testable with fewer than three values
+/// (<see cref="NotTestableReason.TooFewValues"/>) or when the residuals or the run-order values are all equal
+/// (<see cref="NotTestableReason.ZeroSpread"/>). Residuals lying exactly on a line give t = ±∞ and p = 0.
+/// The p-value is 2 F_t(−|t|) from MathNet's Student t CDF, a lower tail, so small p keep their precision.
+/// </remarks>
+public static class OrderTrend
+{
+    /// <summary>Regresses the residuals on run position 1..n.</summary>
+    public static OrderTrendResult Test(ReadOnlySpan<double> residuals)
+    {
+        var positions = new double[residuals.Length];
+        for (var i = 0; i < positions.Length; i++)
+        {
+            positions[i] = i + 1;
+        }
+
+        return Test(residuals, positions);
+    }
+
+    /// <summary>Regresses the residuals on the given run-order values (same length, same order).</summary>
+    /// <exception cref="ArgumentException">The lengths differ or a value is not finite.</exception>
+    public static OrderTrendResult Test(ReadOnlySpan<double> residuals, ReadOnlySpan<double> runOrder)
+    {
+        if (runOrder.Length != residuals.Length)
+        {
+            throw new ArgumentException($"There are {residuals.Length} residuals but {runOrder.Length} run-order values.", nameof(runOrder));
+        }
+
+        SampleGuard.RequireFinite(residuals, nameof(residuals));
+        SampleGuard.RequireFinite(runOrder, nameof(runOrder));
+        var n = residuals.Length;
+        if (n < 3)
+        {
+            return NotTestable(NotTestableReason.TooFewValues);
+        }
+
+        var tMean = Descriptive.Mean(runOrder);
+        var eMean = Descriptive.Mean(residuals);
+        var sxx = 0.0;
+        var sxy = 0.0;
+        for (var i = 0; i < n; i++)
+        {
+            var dt = runOrder[i] - tMean;
+            sxx += dt * dt;
+            sxy += dt * (residuals[i] - eMean);
+        }
+
+        if (sxx == 0.0 || SampleGuard.HasNoSpread(residuals))
+        {
+            return NotTestable(NotTestableReason.ZeroSpread);
+        }
+
+        var slope = sxy / sxx;
+        var sse = 0.0;
+        for (var i = 0; i < n; i++)
+        {
+            var r = residuals[i] - eMean - (slope * (runOrder[i] - tMean));
+            sse += r * r;
+        }
+
+        double df = n - 2;
+        var se = Math.Sqrt(sse / df / sxx);
+        var t = slope / se;
+        var p = se == 0.0 ? 0.0 : Math.Min(1.0, 2.0 * StudentT.CDF(0.0, 1.0, df, -Math.Abs(t)));
+        return new OrderTrendResult(slope, se, t, df, p);
+    }
+
+    private static OrderTrendResult NotTestable(string reason) => new(double.NaN, double.NaN, double.NaN, double.NaN, double.NaN, reason);
+}

@@ -35,6 +35,7 @@ public static class ProblemCodes
     public const string RaggedRow = "data.ragged-row";
     public const string BadRunOrder = "data.bad-run-order";
     public const string NonNumericLevel = "data.non-numeric-level";
+    public const string DuplicateRun = "data.duplicate-run";
 
     public const string OutputIsInput = "output.is-input";
     public const string OutputUnwritable = "output.unwritable";

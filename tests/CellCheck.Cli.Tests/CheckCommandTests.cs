@@ -47,6 +47,17 @@ public sealed class CheckCommandTests
     }
 
     [Fact]
+    public void A_drift_in_run_order_is_flagged_and_the_same_data_in_shuffled_order_are_not()
+    {
+        var (drift, driftOut, _) = CliRunner.Run("check", CliRunner.Design("oven-drift.yaml"));
+        Assert.Equal(1, drift);
+        Assert.Contains("not independent in run order", driftOut, StringComparison.Ordinal);
+        var (shuffled, shuffledOut, _) = CliRunner.Run("check", CliRunner.Design("oven-drift-shuffled.yaml"));
+        Assert.Equal(0, shuffled);
+        Assert.DoesNotContain("not independent", shuffledOut, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void The_json_report_matches_its_golden_file_and_the_schema_keys()
     {
         var folder = Path.Combine(Path.GetTempPath(), "cellcheck-cli-" + Guid.NewGuid().ToString("N"));

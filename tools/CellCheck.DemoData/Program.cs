@@ -10,7 +10,8 @@ internal static class Program
         File.WriteAllText(Path.Combine(folder, "coating-cure.csv"), CoatingCure.Csv());
         File.WriteAllText(Path.Combine(folder, "assay-lab.csv"), AssayLab.Csv());
         File.WriteAllText(Path.Combine(folder, "field-trial.csv"), FieldTrial.Csv());
-        Console.WriteLine("Wrote coating-cure.csv, assay-lab.csv and field-trial.csv to " + folder);
+        File.WriteAllText(Path.Combine(folder, "oven-drift.csv"), OvenDrift.Csv());
+        Console.WriteLine("Wrote coating-cure.csv, assay-lab.csv, field-trial.csv and oven-drift.csv to " + folder);
         return 0;
     }
 }

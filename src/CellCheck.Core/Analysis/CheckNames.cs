@@ -14,4 +14,7 @@ public static class CheckNames
     public const string TukeyNonadditivity = "tukey-nonadditivity";
     public const string LackOfFit = "lack-of-fit";
     public const string Outliers = "outliers";
+    public const string DurbinWatson = "durbin-watson";
+    public const string Runs = "runs";
+    public const string Trend = "trend";
 }

@@ -11,8 +11,4 @@ public sealed record CheckReport(DesignSummary Design, IReadOnlyList<ResponseRep
         "These checks support judgement; they do not replace it. A pass means no evidence against an assumption was found "
         + "at the chosen alpha, not that the assumption holds. Where results feed quality or safety decisions, follow the "
         + "applicable standards and have the analysis reviewed by a qualified person.";
-
-    /// <summary>What this version does not yet assess, said in every report.</summary>
-    public const string IndependenceNote =
-        "Independence in run order is not assessed by this version; look at residuals against run order before trusting the ANOVA.";
 }

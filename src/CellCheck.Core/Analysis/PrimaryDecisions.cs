@@ -13,7 +13,7 @@ namespace CellCheck.Core.Analysis;
 internal static class PrimaryDecisions
 {
     public static List<AssumptionVerdict> Decide(CellPartition partition, ResidualSet residuals, PooledResult pooled, SpreadResult spread,
-        ShapeCalibration calibration, double alpha)
+        OrderResult order, ShapeCalibration calibration, double alpha)
     {
         var choice = calibration.Choice;
         double pNormality, pSpread;
@@ -39,7 +39,9 @@ internal static class PrimaryDecisions
             pSpread = double.IsNaN(spreadStat) ? double.NaN : pSpread;
         }
 
-        var adjusted = FamilyDecision.Adjusted([pNormality, pSpread]);
+        var dw = order.Checks.FirstOrDefault(c => c.Check == CheckNames.DurbinWatson);
+        var pOrder = dw?.P ?? double.NaN;
+        var adjusted = FamilyDecision.Adjusted([pNormality, pSpread, pOrder]);
         var method = calibration.MonteCarlo
             ? "simulated for this design (" + NumberText.Count(calibration.NormalityNull!.Draws) + " null draws)"
             : "asymptotic (design above the simulation limit)";
@@ -52,8 +54,7 @@ internal static class PrimaryDecisions
             Verdict(AssumptionNames.EqualSpread, choice.Spread == SpreadPrimary.None ? null : spreadCheck, spreadStat,
                 pSpread, adjusted[1], alpha, choice.SpreadReason, method,
                 choice.Spread == SpreadPrimary.None ? NotTestableReason.TooFewGroups : SpreadReason(spread, spreadCheck)),
-            new AssumptionVerdict(AssumptionNames.Independence, null, null, null, null, CheckStatus.NotTestable, "not-assessed",
-                CheckReport.IndependenceNote, "none"),
+            Independence(order, dw, adjusted[2], alpha),
         ];
     }
 
@@ -66,6 +67,27 @@ internal static class PrimaryDecisions
         }
 
         return new AssumptionVerdict(name, check, statistic, p, adjusted, StatusRules.FromP(adjusted, alpha), null, rule, method);
+    }
+
+    private static AssumptionVerdict Independence(OrderResult order, CheckResult? dw, double adjusted, double alpha)
+    {
+        const string Rule = "Durbin-Watson on the model residuals in run order, against positive autocorrelation (drift and carry-over "
+            + "make neighbouring runs alike): its p is exact for the fitted design under normal errors (Imhof 1961), with the "
+            + "normal approximation using the design's exact mean and variance of d above 1000 rows";
+        if (order.Column is null)
+        {
+            return new AssumptionVerdict(AssumptionNames.Independence, null, null, null, null, CheckStatus.NotTestable, NotTestableReason.NoRunOrder,
+                Rule, "none");
+        }
+
+        if (dw is null || dw.P is null)
+        {
+            return new AssumptionVerdict(AssumptionNames.Independence, CheckNames.DurbinWatson, null, null, null, CheckStatus.NotTestable,
+                dw?.Reason ?? NotTestableReason.TooFewValues, Rule, "none");
+        }
+
+        return new AssumptionVerdict(AssumptionNames.Independence, CheckNames.DurbinWatson, dw.Statistic, dw.P, adjusted,
+            StatusRules.FromP(adjusted, alpha), null, Rule, order.Method ?? "exact");
     }
 
     private static string SpreadReason(SpreadResult spread, string check) =>

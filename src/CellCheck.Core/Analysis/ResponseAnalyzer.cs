@@ -26,11 +26,13 @@ public static class ResponseAnalyzer
         var spread = SpreadChecks.Run(partition, residuals, cells, options.Alpha);
         var model = ModelChecks.Run(partition, data.Blocks, spec, residuals, data.SourceLines, options.Alpha);
         var calibration = Calibrator.Calibrate(residuals.NullPlan, options.Alpha, options.Simulation);
-        var assumptions = PrimaryDecisions.Decide(partition, residuals, pooled, spread, calibration, options.Alpha);
+        var order = OrderChecks.Run(data, partition, residuals, options.Alpha);
+        var assumptions = PrimaryDecisions.Decide(partition, residuals, pooled, spread, order, calibration, options.Alpha);
         var verdict = VerdictWriter.Write(new VerdictInputs(census, cells, pooled, spread, partition.Factors, assumptions, calibration.Operating, model), options);
         return new ResponseReport(column.Name, column.Unit, partition.Values.Count, data.Excluded[response], census, cells, pooled, spread, verdict)
         {
             Model = model,
+            Order = order,
             Rows = Rows(partition, residuals, data.SourceLines, column.Origin),
         };
     }

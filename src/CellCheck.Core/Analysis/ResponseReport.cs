@@ -18,6 +18,9 @@ public sealed record ResponseReport(
     /// <summary>The fitted model and the checks of its form.</summary>
     public required ModelResult Model { get; init; }
 
+    /// <summary>Independence in run order.</summary>
+    public required OrderResult Order { get; init; }
+
     /// <summary>Per-row diagnostics in cell order.</summary>
     public required RowDiagnostics Rows { get; init; }
 }

@@ -23,6 +23,13 @@ internal static class VerdictWriter
             findings.Add("Spread differs across cells: " + Primary(spread) + SupportingText.SdRatio(x) + ".");
         }
 
+        var independence = x.Assumptions.Single(a => a.Assumption == AssumptionNames.Independence);
+        if (independence.Status == CheckStatus.Flag)
+        {
+            findings.Add("Residuals are not independent in run order: " + Primary(independence)
+                + ". Look at residuals against run order for drift (an oven warming, reagent ageing) or carry-over; consider blocking by time.");
+        }
+
         if (normality.Status == CheckStatus.Flag && spread.Status == CheckStatus.Flag)
         {
             findings.Add("Unequal spread alone makes pooled residuals look heavy-tailed; settle the spread question before judging normality.");
@@ -33,7 +40,7 @@ internal static class VerdictWriter
         if (!anyFlag && judged.Count > 0)
         {
             findings.Add("No assumption is flagged at alpha " + NumberText.Value(options.Alpha) + " (Holm across "
-                + string.Join(" and ", judged.Select(a => a.Assumption)) + "). With " + ReplicateText(x.Census)
+ + string.Join(", ", judged.Select(a => a.Assumption)) + "). With " + ReplicateText(x.Census)
                 + " per cell, moderate departures can go unseen: absence of evidence is not proof that the assumptions hold.");
         }
 
@@ -57,6 +64,12 @@ internal static class VerdictWriter
         if (spread.Status == CheckStatus.NotTestable)
         {
             findings.Add("Equal spread could not be judged: " + ReasonText(spread.Reason) + ".");
+        }
+
+        var independence = x.Assumptions.Single(a => a.Assumption == AssumptionNames.Independence);
+        if (independence.Status == CheckStatus.NotTestable)
+        {
+            findings.Add("Independence could not be judged: " + ReasonText(independence.Reason) + ".");
         }
 
         var untested = x.Cells.Where(c => c.Checks[0].Status == CheckStatus.NotTestable).GroupBy(c => c.Checks[0].Reason)
@@ -88,6 +101,7 @@ internal static class VerdictWriter
         Statistics.NotTestableReason.ZeroVarianceGroup => "a cell has zero variance",
         Statistics.NotTestableReason.DegenerateWithinGroups => "the deviations do not vary within cells",
         Statistics.NotTestableReason.NoResidualDegreesOfFreedom => "no residual degrees of freedom",
+        Statistics.NotTestableReason.NoRunOrder => "no run order was declared (add run_order: COLUMN, or run_order: file when the rows are in run order)",
         _ => reason ?? "unknown reason",
     };
 }

@@ -60,4 +60,10 @@ public sealed class DesignData
     public IReadOnlyList<IReadOnlyList<ExcludedRow>> Excluded { get; }
 
     public int RowCount => SourceLines.Length;
+
+    /// <summary>Run position (or time in seconds) of each row, NaN where missing; null when no run order was declared.</summary>
+    public double[]? RunOrder { get; init; }
+
+    /// <summary>The run-order column ("file" when the file order is the run order); null when none was declared.</summary>
+    public string? RunOrderColumn { get; init; }
 }

@@ -41,4 +41,7 @@ public static class NotTestableReason
 
     /// <summary>Too few residual degrees of freedom for the check.</summary>
     public const string TooFewResidualDf = "too-few-residual-df";
+
+    /// <summary>No run order was declared: independence cannot be checked.</summary>
+    public const string NoRunOrder = "no-run-order";
 }

@@ -7,6 +7,9 @@ namespace CellCheck.IO.Data;
 /// <summary>Finds the data columns a design names in the header; a missing column is a problem located in the design file.</summary>
 internal sealed record ColumnMap(int[] Factors, int[] Responses, int? RunOrder, List<Problem> Problems)
 {
+    /// <summary><c>run_order: file</c> states that the rows are in run order.</summary>
+    public const string FileOrderKeyword = "file";
+
     public static ColumnMap Resolve(DesignFile design, SepReaderHeader header)
     {
         var problems = new List<Problem>();
@@ -28,7 +31,7 @@ internal sealed record ColumnMap(int[] Factors, int[] Responses, int? RunOrder, 
 
         var factors = design.Factors.Concat(design.Blocks).Select(Find).ToArray();
         var responses = design.Responses.Select(Find).ToArray();
-        int? runOrder = design.RunOrder is { } ro ? Find(ro) : null;
+        int? runOrder = design.RunOrder is { } ro && ro.Column != FileOrderKeyword ? Find(ro) : null;
         return new ColumnMap(factors, responses, runOrder, problems);
     }
 }

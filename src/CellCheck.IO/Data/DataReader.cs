@@ -71,6 +71,7 @@ public static class DataReader
         var factors = factorSpecs.Select(f => new LevelInterner(f.Name, 1024)).ToArray();
         var responses = design.Responses.Select(r => new ResponseBuilder(r.Name, r.Unit, 1024)).ToArray();
         var lines = new List<int>(1024);
+        var runOrder = columns.RunOrder is null ? null : new RunOrderBuilder(design.RunOrder!.Column, path);
         var lastLine = 1;
         try
         {
@@ -79,6 +80,7 @@ public static class DataReader
                 lastLine = row.LineNumberToExcl;
                 var line = row.LineNumberFrom;
                 lines.Add(line);
+                runOrder?.Add(row[columns.RunOrder!.Value].Span.Trim(), line);
                 string? missingFactor = null;
                 for (var f = 0; f < factors.Length; f++)
                 {
@@ -114,6 +116,11 @@ public static class DataReader
                 "The data file has a header but no data rows.", "Add one line per run below the header."));
         }
 
+        if (runOrder?.Problem is { } orderProblem)
+        {
+            return LoadResult<DesignData>.Failure(orderProblem);
+        }
+
         var numericProblems = NumericLevels.Check(design, factors);
         if (numericProblems.Count > 0)
         {
@@ -126,9 +133,16 @@ public static class DataReader
             responses.Select(r => r.Build()).ToArray(),
             [.. lines],
             responses.Select(r => r.Excluded).ToArray(),
-            built[design.Factors.Count..]);
-        return LoadResult<DesignData>.Success(data);
+            built[design.Factors.Count..])
+        {
+            RunOrder = design.RunOrder is null ? null : runOrder?.Build() ?? FileOrder(lines),
+            RunOrderColumn = design.RunOrder?.Column,
+        };
+        var duplicate = RunOrderDuplicates.Find(design, data);
+        return duplicate is null ? LoadResult<DesignData>.Success(data) : LoadResult<DesignData>.Failure(duplicate);
     }
+
+    private static double[] FileOrder(List<int> lines) => lines.Select(l => (double)l).ToArray();
 
     private static string FirstLine(string message)
     {

@@ -39,7 +39,7 @@ internal static class AssumptionTable
             console.Write(new Text("For these cell sizes the verdict flags clean data " + Percent(o.FalseAlarm.Rate) + " of the time (95% CI "
                 + Percent(o.FalseAlarm.Lower) + " to " + Percent(o.FalseAlarm.Upper) + "); it catches a 4:1 variance ratio in one cell "
                 + Percent(o.VarianceRatio4.Rate) + " and a lognormal cell (shape 0.5) " + Percent(o.Lognormal.Rate) + " of the time ("
-                + NumberText.Count(o.FalseAlarm.Draws) + " simulated data sets each).\n"));
+                + NumberText.Count(o.FalseAlarm.Draws) + " simulated data sets each, for the normality and spread decisions; the independence p is exact).\n"));
         }
     }
 

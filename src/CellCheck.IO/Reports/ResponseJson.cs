@@ -51,6 +51,7 @@ internal static class ResponseJson
 
         w.WriteEndArray();
         ModelJson.Write(w, r.Model);
+        OrderJson.Write(w, r.Order);
         WritePooled(w, r.Pooled);
         WriteSpread(w, r, factors);
         VerdictJson.Write(w, r.Verdict);

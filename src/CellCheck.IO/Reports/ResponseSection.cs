@@ -20,6 +20,7 @@ internal static class ResponseSection
         AssumptionTable.Write(console, r.Verdict);
         console.WriteLine();
         ModelSection.Write(console, r.Model);
+        OrderSection.Write(console, r.Order);
         console.WriteLine();
         var c = r.Census;
         var replicates = c.MinReplicates == c.MaxReplicates ? NumberText.Count(c.MinReplicates) : NumberText.Count(c.MinReplicates) + " to " + NumberText.Count(c.MaxReplicates);

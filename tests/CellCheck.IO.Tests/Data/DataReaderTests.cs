@@ -98,4 +98,44 @@ public sealed class DataReaderTests
         var p = Assert.Single(Read(t).Problems);
         Assert.Equal((ProblemCodes.DataNotFound, 2, 7), (p.Code, p.Line, p.Column));
     }
+
+    [Fact]
+    public void Run_order_reads_numbers_and_timestamps_and_file_order()
+    {
+        using var t = new TempDesign("a,b,y,t\n1,x,1,2026-03-01T08:00:00Z\n1,x,2,2026-03-01T08:30:00Z\n1,x,3,\n",
+            "data: data.csv\nfactors: [a, b]\nresponses: [y]\nrun_order: t\n");
+        var d = Read(t).Value!;
+        Assert.Equal(1800.0, d.RunOrder![1] - d.RunOrder[0]);
+        Assert.True(double.IsNaN(d.RunOrder[2]));
+        using var f = new TempDesign("a,b,y\n1,x,1\n1,x,2\n", "data: data.csv\nfactors: [a, b]\nresponses: [y]\nrun_order: file\n");
+        Assert.Equal([2.0, 3.0], Read(f).Value!.RunOrder!);
+    }
+
+    [Fact]
+    public void A_run_order_that_is_not_a_number_or_time_is_located()
+    {
+        using var t = new TempDesign("a,b,y,t\n1,x,1,1\n1,x,2,second\n", "data: data.csv\nfactors: [a, b]\nresponses: [y]\nrun_order: t\n");
+        var p = Assert.Single(Read(t).Problems);
+        Assert.Equal((ProblemCodes.BadRunOrder, 3, "t"), (p.Code, p.Line, p.ColumnName));
+    }
+
+    [Fact]
+    public void The_same_run_position_in_two_blocks_is_a_located_problem_but_ties_within_a_block_are_not()
+    {
+        var design = "data: data.csv\nfactors: [a]\nblocks: [b]\nresponses: [y]\nrun_order: t\n";
+        using var ok = new TempDesign("a,b,y,t\n1,x,1,1\n2,x,2,1\n1,z,3,2\n", design);
+        Assert.True(Read(ok).Ok);
+        using var bad = new TempDesign("a,b,y,t\n1,x,1,1\n2,z,2,1\n", design);
+        var p = Assert.Single(Read(bad).Problems);
+        Assert.Equal((ProblemCodes.DuplicateRun, 3), (p.Code, p.Line));
+    }
+
+    [Fact]
+    public void A_factor_declared_numeric_with_a_text_level_is_located_in_the_design()
+    {
+        using var t = new TempDesign("a,b,y\n1,x,1\nhot,x,2\n", "data: data.csv\nfactors:\n  - column: a\n    kind: numeric\n  - b\nresponses: [y]\n");
+        var p = Assert.Single(Read(t).Problems);
+        Assert.Equal((ProblemCodes.NonNumericLevel, 3), (p.Code, p.Line));
+        Assert.Contains("'hot'", p.What, StringComparison.Ordinal);
+    }
 }

@@ -123,4 +123,27 @@ public sealed class DesignReaderTests
         Assert.Equal(ProblemCodes.DesignNotFound, Assert.Single(DesignReader.Read("/nonexistent/design.yaml").Problems).Code);
         Assert.Equal(ProblemCodes.DesignUnreadable, Assert.Single(DesignReader.Read(Path.GetTempPath()).Problems).Code);
     }
+
+    [Fact]
+    public void Blocks_and_a_term_list_model_are_read()
+    {
+        var r = Parse("data: t.csv\nfactors: [n, v]\nblocks: [block]\nresponses: [y]\nmodel: [n, v, n*v]\n");
+        Assert.True(r.Ok);
+        Assert.Equal("block", Assert.Single(r.Value!.Blocks).Column);
+        Assert.Equal(ModelForm.Terms, r.Value.Model.Form);
+        Assert.Equal(["n", "v"], r.Value.Model.Terms[2].Factors);
+    }
+
+    [Theory]
+    [InlineData("model: [n, w]", ProblemCodes.UnknownTerm)]
+    [InlineData("model: [n, block]", ProblemCodes.UnknownTerm)]
+    [InlineData("model: [n, n]", ProblemCodes.DuplicateTerm)]
+    [InlineData("model: [n*n]", ProblemCodes.DuplicateTerm)]
+    [InlineData("model: partial", ProblemCodes.BadModel)]
+    public void A_bad_model_is_located(string line, string code)
+    {
+        var r = Parse("data: t.csv\nfactors: [n, v]\nblocks: [block]\nresponses: [y]\n" + line + "\n");
+        var p = Assert.Single(r.Problems);
+        Assert.Equal((code, 5), (p.Code, p.Line));
+    }
 }

@@ -1,0 +1,44 @@
+using System.Globalization;
+using CellCheck.Core.Problems;
+
+namespace CellCheck.IO.Data;
+
+/// <summary>
+/// Reads the run-order column: numbers, or timestamps (ISO 8601 and other invariant date-time forms, taken as
+/// seconds). Missing values become NaN (those rows are left out of the order checks, and the report says so);
+/// text that is neither is a located problem.
+/// </summary>
+internal sealed class RunOrderBuilder(string column, string path)
+{
+    private readonly List<double> _values = [];
+
+    public Problem? Problem { get; private set; }
+
+    public void Add(ReadOnlySpan<char> text, int line)
+    {
+        if (MissingTokens.IsMissing(text))
+        {
+            _values.Add(double.NaN);
+            return;
+        }
+
+        if (double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out var number) && double.IsFinite(number))
+        {
+            _values.Add(number);
+            return;
+        }
+
+        if (DateTimeOffset.TryParse(text, CultureInfo.InvariantCulture, DateTimeStyles.AssumeUniversal, out var time))
+        {
+            _values.Add(time.UtcTicks / (double)TimeSpan.TicksPerSecond);
+            return;
+        }
+
+        _values.Add(double.NaN);
+        Problem ??= new Problem(ProblemCodes.BadRunOrder, path, line, null,
+            $"The run-order column '{column}' holds '{text.ToString()}', which is neither a number nor a date and time.",
+            "Write run positions as numbers (1, 2, 3, ...) or times as 2026-03-01T08:30:00.") { ColumnName = column };
+    }
+
+    public double[] Build() => [.. _values];
+}

@@ -33,7 +33,11 @@ public static class ResponseAnalyzer
         {
             Model = model,
             Order = order,
-            Rows = Rows(partition, residuals, data.SourceLines, column.Origin),
+            Rows = Rows(partition, residuals, data.SourceLines, column.Origin) with
+            {
+                RunOrder = data.RunOrder is { } ro ? partition.RowOrder.Select(r => ro[r]).ToArray() : null,
+                BlockCodes = data.Blocks.Select(b => partition.RowOrder.Select(r => b.Codes[r]).ToArray()).ToArray(),
+            },
         };
     }
 

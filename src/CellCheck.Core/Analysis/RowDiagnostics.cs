@@ -1,7 +1,8 @@
 namespace CellCheck.Core.Analysis;
 
 /// <summary>Per-row diagnostics in cell order: data-file line, cell index, fitted value, residual, internally and
-/// externally studentized residuals, leverage and Cook's distance (NaN where leverage is one).</summary>
+/// externally studentized residuals, leverage and Cook's distance (NaN where leverage is one), and the run position
+/// (null when no run order was declared; NaN where missing).</summary>
 public sealed record RowDiagnostics(
     int[] Lines,
     int[] Cells,
@@ -10,4 +11,10 @@ public sealed record RowDiagnostics(
     double[] Studentized,
     double[] StudentizedExternal,
     double[] Leverage,
-    double[] CooksDistance);
+    double[] CooksDistance)
+{
+    public double[]? RunOrder { get; init; }
+
+    /// <summary>Block level index of each row per block factor (empty without blocks).</summary>
+    public IReadOnlyList<int[]> BlockCodes { get; init; } = [];
+}

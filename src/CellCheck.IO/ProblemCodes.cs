@@ -22,6 +22,9 @@ public static class ProblemCodes
     public const string BadAdjust = "design.bad-adjust";
     public const string BadKind = "design.bad-kind";
     public const string MissingColumn = "design.missing-column";
+    public const string BadDataOption = "design.bad-data-option";
+    public const string BadWhere = "design.bad-where";
+    public const string BadAdjustAcross = "design.bad-adjust-across";
     public const string BadModel = "design.bad-model";
     public const string UnknownTerm = "design.unknown-term";
     public const string DuplicateTerm = "design.duplicate-term";
@@ -36,6 +39,10 @@ public static class ProblemCodes
     public const string BadRunOrder = "data.bad-run-order";
     public const string NonNumericLevel = "data.non-numeric-level";
     public const string DuplicateRun = "data.duplicate-run";
+    public const string ThousandsSeparator = "data.thousands-separator";
+    public const string SheetNotFound = "data.sheet-not-found";
+    public const string EmptyHeader = "data.empty-header";
+    public const string NoRowsLeft = "data.no-rows-left";
 
     public const string OutputIsInput = "output.is-input";
     public const string OutputUnwritable = "output.unwritable";

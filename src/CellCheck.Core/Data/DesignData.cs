@@ -64,6 +64,9 @@ public sealed class DesignData
     /// <summary>Run position (or time in seconds) of each row, NaN where missing; null when no run order was declared.</summary>
     public double[]? RunOrder { get; init; }
 
+    /// <summary>Rows left out by the design's row filter (not errors; counted in the report).</summary>
+    public int FilteredOut { get; init; }
+
     /// <summary>The run-order column ("file" when the file order is the run order); null when none was declared.</summary>
     public string? RunOrderColumn { get; init; }
 }

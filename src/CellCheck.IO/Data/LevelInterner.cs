@@ -1,4 +1,3 @@
-using System.Globalization;
 using CellCheck.Core.Data;
 
 namespace CellCheck.IO.Data;
@@ -35,16 +34,17 @@ internal sealed class LevelInterner(string name, int capacity)
     }
 
     /// <summary>The first label that is not a number, or null when every label is one.</summary>
-    public string? FirstNonNumeric() => _labels.FirstOrDefault(l => !double.TryParse(l, NumberStyles.Float, CultureInfo.InvariantCulture, out _));
+    public string? FirstNonNumeric(NumberSyntax syntax) => _labels.FirstOrDefault(l => double.IsNaN(syntax.ParseDouble(l)));
 
-    public FactorColumn Build(bool asNumbers = false)
+    public FactorColumn Build(bool asNumbers, NumberSyntax syntax)
     {
         var order = Enumerable.Range(0, _labels.Count).ToArray();
         var numbers = new double[_labels.Count];
         var numeric = true;
         for (var i = 0; i < numbers.Length && numeric; i++)
         {
-            numeric = double.TryParse(_labels[i], NumberStyles.Float, CultureInfo.InvariantCulture, out numbers[i]);
+            numbers[i] = syntax.ParseDouble(_labels[i]);
+            numeric = !double.IsNaN(numbers[i]);
         }
 
         if (numeric)
@@ -71,6 +71,6 @@ internal sealed class LevelInterner(string name, int capacity)
             codes[row] = c < 0 ? c : remap[c];
         }
 
-        return new FactorColumn(name, sorted, codes, asNumbers ? sorted.Select(l => double.Parse(l, NumberStyles.Float, CultureInfo.InvariantCulture)).ToArray() : null);
+        return new FactorColumn(name, sorted, codes, asNumbers ? sorted.Select(l => syntax.ParseDouble(l)).ToArray() : null);
     }
 }

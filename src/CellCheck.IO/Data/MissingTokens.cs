@@ -1,7 +1,16 @@
 namespace CellCheck.IO.Data;
 
-/// <summary>Cell texts read as "no value": empty (after trimming) and NA.</summary>
-internal static class MissingTokens
+/// <summary>Cell texts read as "no value": empty cells always, and the design's <c>missing</c> list (default NA), compared after trimming.</summary>
+internal sealed class MissingTokens
 {
-    public static bool IsMissing(ReadOnlySpan<char> text) => text.IsEmpty || text.SequenceEqual("NA");
+    private readonly HashSet<string> _tokens;
+
+    public MissingTokens(IEnumerable<string> tokens)
+    {
+        _tokens = new HashSet<string>(tokens.Select(t => t.Trim()), StringComparer.Ordinal);
+    }
+
+    public static MissingTokens Default { get; } = new(["NA", ""]);
+
+    public bool IsMissing(ReadOnlySpan<char> text) => text.IsEmpty || _tokens.GetAlternateLookup<ReadOnlySpan<char>>().Contains(text);
 }

@@ -10,19 +10,36 @@ namespace CellCheck.IO.Data;
 /// Values outside decimal's range fall back to double parsing. Missing and unusable values become NaN with an
 /// exclusion that says why.
 /// </summary>
-internal sealed class ResponseBuilder(string name, string? unit, int capacity)
+internal sealed class ResponseBuilder(string name, string? unit, int capacity, MissingTokens missing, NumberSyntax syntax)
 {
     private readonly List<double> _values = new(capacity);
     private readonly List<ExcludedRow> _excluded = [];
     private decimal? _origin;
 
-    public void Add(ReadOnlySpan<char> text, int line)
+    /// <summary>The first value that seems to use an undeclared thousands separator (line and text), if any.</summary>
+    public (int Line, string Text)? Grouping { get; private set; }
+
+    public void Add(ReadOnlySpan<char> raw, int line)
     {
-        if (MissingTokens.IsMissing(text))
+        if (missing.IsMissing(raw))
         {
             Exclude(line, "missing", "missing value");
             return;
         }
+
+        Span<char> buffer = stackalloc char[Math.Min(raw.Length, 256)];
+        if (!syntax.TryNormalize(raw, buffer, out var length, out var grouping))
+        {
+            if (grouping)
+            {
+                Grouping ??= (line, raw.ToString());
+            }
+
+            Exclude(line, grouping ? "thousands-separator" : "not-a-number", (grouping ? "thousands separator in " : "not a number: ") + $"'{Clip(raw)}'");
+            return;
+        }
+
+        var text = buffer[..length];
 
         if (text.IndexOfAny('e', 'E') < 0 && decimal.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out var exact))
         {
@@ -35,7 +52,7 @@ internal sealed class ResponseBuilder(string name, string? unit, int capacity)
         {
             if (!double.IsFinite(value))
             {
-                Exclude(line, "not-finite", $"not a finite number: '{Clip(text)}'");
+                Exclude(line, "not-finite", $"not a finite number: '{Clip(raw)}'");
                 return;
             }
 
@@ -45,7 +62,7 @@ internal sealed class ResponseBuilder(string name, string? unit, int capacity)
         }
 
         Exclude(line, NonFinite(text) ? "not-finite" : "not-a-number",
-            (NonFinite(text) ? "not a finite number" : "not a number") + $": '{Clip(text)}'");
+            (NonFinite(text) ? "not a finite number" : "not a number") + $": '{Clip(raw)}'");
     }
 
     private static bool NonFinite(ReadOnlySpan<char> text)

@@ -8,7 +8,7 @@ namespace CellCheck.IO.Data;
 /// seconds). Missing values become NaN (those rows are left out of the order checks, and the report says so);
 /// text that is neither is a located problem.
 /// </summary>
-internal sealed class RunOrderBuilder(string column, string path)
+internal sealed class RunOrderBuilder(string column, string path, MissingTokens missing, NumberSyntax syntax)
 {
     private readonly List<double> _values = [];
 
@@ -16,13 +16,13 @@ internal sealed class RunOrderBuilder(string column, string path)
 
     public void Add(ReadOnlySpan<char> text, int line)
     {
-        if (MissingTokens.IsMissing(text))
+        if (missing.IsMissing(text))
         {
             _values.Add(double.NaN);
             return;
         }
 
-        if (double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out var number) && double.IsFinite(number))
+        if (syntax.ParseDouble(text) is var number && double.IsFinite(number))
         {
             _values.Add(number);
             return;

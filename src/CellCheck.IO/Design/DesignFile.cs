@@ -15,4 +15,11 @@ public sealed record DesignFile(
     double Alpha,
     AdjustMethod Adjust,
     IReadOnlyList<ColumnSpec> Blocks,
-    ModelDeclaration Model);
+    ModelDeclaration Model)
+{
+    /// <summary>How the data file is read (delimiter, decimal, missing tokens, sheet, filter).</summary>
+    public DataOptions Options { get; init; } = DataOptions.Default;
+
+    /// <summary>The family of the within-cell p-value adjustment.</summary>
+    public AdjustAcross AdjustAcross { get; init; } = AdjustAcross.Cells;
+}

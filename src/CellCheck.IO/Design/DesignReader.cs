@@ -14,7 +14,11 @@ public static class DesignReader
     /// <summary>Design files above this size are refused (a design is a few lines).</summary>
     public const long MaxBytes = 1 << 20;
 
-    private static readonly string[] Keys = ["name", "data", "factors", "responses", "blocks", "model", "run_order", "alpha", "adjust"];
+    private static readonly string[] Keys =
+    [
+        "name", "data", "factors", "responses", "blocks", "model", "run_order", "alpha", "adjust", "adjust_across",
+        "sheet", "header_row", "delimiter", "decimal", "thousands", "missing", "where",
+    ];
 
     public static LoadResult<DesignFile> Read(string path)
     {

@@ -40,6 +40,8 @@ internal sealed class DesignValidator(string path, YamlMappingNode root, string[
         var alpha = ReadAlpha(seen);
         var adjust = ReadAdjust(seen);
         var name = seen.TryGetValue("name", out var n) ? Scalar(n, "name") : null;
+        var options = new DataOptionsReader(path, _problems).Read(seen);
+        var across = ReadAdjustAcross(seen);
         CrossCheck(factors.Concat(blocks).ToList(), responses, runOrder);
 
         if (_problems.Count > 0 || data is null)
@@ -49,7 +51,11 @@ internal sealed class DesignValidator(string path, YamlMappingNode root, string[
 
         var folder = System.IO.Path.GetDirectoryName(System.IO.Path.GetFullPath(path)) ?? ".";
         var dataPath = System.IO.Path.GetFullPath(System.IO.Path.Combine(folder, data.Value.Text));
-        return LoadResult<DesignFile>.Success(new DesignFile(path, name, dataPath, data.Value.Text, data.Value.Mark, factors, responses, runOrder, alpha, adjust, blocks, model));
+        return LoadResult<DesignFile>.Success(new DesignFile(path, name, dataPath, data.Value.Text, data.Value.Mark, factors, responses, runOrder, alpha, adjust, blocks, model)
+        {
+            Options = options,
+            AdjustAcross = across,
+        });
     }
 
     private void CrossCheck(IReadOnlyList<ColumnSpec> factors, IReadOnlyList<ColumnSpec> responses, ColumnSpec? runOrder)
@@ -93,6 +99,23 @@ internal sealed class DesignValidator(string path, YamlMappingNode root, string[
 
         Add(ProblemCodes.BadAlpha, node, $"alpha must be a number above 0 and at most 0.5; found '{text}'.", "Write for example alpha: 0.05 (with a decimal point).");
         return 0.05;
+    }
+
+    private AdjustAcross ReadAdjustAcross(Dictionary<string, YamlNode> seen)
+    {
+        if (!seen.TryGetValue("adjust_across", out var node))
+        {
+            return AdjustAcross.Cells;
+        }
+
+        switch (Scalar(node, "adjust_across"))
+        {
+            case "cells": return AdjustAcross.Cells;
+            case "cells-and-responses": return AdjustAcross.CellsAndResponses;
+            default:
+                Add(ProblemCodes.BadAdjustAcross, node, "adjust_across must be cells or cells-and-responses.", "Write adjust_across: cells (default) or adjust_across: cells-and-responses.");
+                return AdjustAcross.Cells;
+        }
     }
 
     private AdjustMethod ReadAdjust(Dictionary<string, YamlNode> seen)

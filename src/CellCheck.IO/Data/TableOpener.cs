@@ -1,0 +1,123 @@
+using CellCheck.Core.Problems;
+using CellCheck.IO.Design;
+
+namespace CellCheck.IO.Data;
+
+/// <summary>Opens the design's data file as delimited text or an XLSX sheet, and checks its header.</summary>
+internal static class TableOpener
+{
+    public static (ITableRows? Table, Problem? Problem) Open(DesignFile design)
+    {
+        var path = design.DataPath;
+        Problem Fail(string code, int? line, string what, string fix, bool inDesign = false) =>
+            inDesign ? new Problem(code, design.Path, design.DataMark.Line, design.DataMark.Column, what, fix) : new Problem(code, path, line, null, what, fix);
+        if (Directory.Exists(path) || !File.Exists(path))
+        {
+            return (null, Fail(ProblemCodes.DataNotFound, null, $"The data file '{design.DataText}' does not exist (looked for {path}).",
+                "Give the data file's path relative to the design file.", inDesign: true));
+        }
+
+        var extension = Path.GetExtension(path).ToLowerInvariant();
+        try
+        {
+            ITableRows table;
+            if (extension == ".xlsx")
+            {
+                var names = XlsxRows.SheetNames(path);
+                var sheet = SheetName(design.Options.Sheet, names);
+                if (sheet is null)
+                {
+                    return (null, Fail(ProblemCodes.SheetNotFound, null, $"The workbook has no sheet '{design.Options.Sheet}' (sheets: {string.Join(", ", names)}).",
+                        "Write sheet: with one of these names, or its position from 1.", inDesign: true));
+                }
+
+                var xlsx = XlsxRows.Open(path, sheet, design.Options.HeaderRow);
+                if (xlsx is null)
+                {
+                    return (null, Fail(ProblemCodes.DataEmpty, design.Options.HeaderRow, $"The sheet '{sheet}' has no row {design.Options.HeaderRow} to read the header from.",
+                        "Check sheet: and header_row: in the design file."));
+                }
+
+                table = xlsx;
+            }
+            else if (extension is ".csv" or ".tsv" or ".txt")
+            {
+                var csv = new CsvRows(path, design.Options.Delimiter, new NumberSyntax(design.Options.Decimal, design.Options.Thousands));
+                if (csv.IsEmpty)
+                {
+                    csv.Dispose();
+                    return (null, Fail(ProblemCodes.DataEmpty, 1, "The data file is empty.", "The first line must name the columns; each following line holds one run."));
+                }
+
+                table = csv;
+            }
+            else
+            {
+                return (null, Fail(ProblemCodes.DataUnsupportedFormat, null, $"'{design.DataText}' is neither delimited text (.csv, .tsv, .txt) nor a workbook (.xlsx).",
+                    "Save the data as CSV (UTF-8) or XLSX and name that file.", inDesign: true));
+            }
+
+            return HeaderProblem(table, path) is { } problem ? (Dispose(table), problem) : (table, null);
+        }
+        catch (ArgumentException ex) when (ex.Message.Contains("found", StringComparison.Ordinal))
+        {
+            return (null, Fail(ProblemCodes.DuplicateColumn, 1, "The header names a column more than once: " + FirstLine(ex.Message), "Give every column of the header its own name."));
+        }
+        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException or InvalidOperationException or InvalidDataException or System.Xml.XmlException)
+        {
+            return (null, Fail(ProblemCodes.DataUnreadable, null, "The data file cannot be read: " + FirstLine(ex.Message),
+                "Check that it is a delimited text file or an XLSX workbook, not locked, and readable."));
+        }
+    }
+
+    private static ITableRows? Dispose(ITableRows table)
+    {
+        table.Dispose();
+        return null;
+    }
+
+    private static Problem? HeaderProblem(ITableRows table, string path)
+    {
+        for (var i = 0; i < table.Header.Count; i++)
+        {
+            if (string.IsNullOrWhiteSpace(table.Header[i]) && i < table.Header.Count - 1)
+            {
+                return new Problem(ProblemCodes.EmptyHeader, path, null, i + 1, $"The header cell at {table.Locate(table.Line, i)} is empty (a merged or missing header).",
+                    "Give every column a name in the header row (unmerge merged header cells).");
+            }
+
+            for (var j = 0; j < i; j++)
+            {
+                if (!string.IsNullOrEmpty(table.Header[i]) && string.Equals(table.Header[i], table.Header[j], StringComparison.Ordinal))
+                {
+                    return new Problem(ProblemCodes.DuplicateColumn, path, null, i + 1, $"The header names '{table.Header[i]}' twice ({table.Locate(table.Line, j)} and {table.Locate(table.Line, i)}).",
+                        "Give every column of the header its own name.");
+                }
+            }
+        }
+
+        return null;
+    }
+
+    private static string? SheetName(string? wanted, string[] names)
+    {
+        if (wanted is null)
+        {
+            return names.FirstOrDefault();
+        }
+
+        if (names.Contains(wanted, StringComparer.Ordinal))
+        {
+            return wanted;
+        }
+
+        return int.TryParse(wanted, System.Globalization.NumberStyles.None, System.Globalization.CultureInfo.InvariantCulture, out var index)
+            && index >= 1 && index <= names.Length ? names[index - 1] : null;
+    }
+
+    internal static string FirstLine(string message)
+    {
+        var cut = message.IndexOf('\n', StringComparison.Ordinal);
+        return (cut < 0 ? message : message[..cut]).Trim();
+    }
+}

@@ -1,0 +1,92 @@
+using System.Globalization;
+using MiniExcelLibs;
+
+namespace CellCheck.IO.Data;
+
+/// <summary>
+/// A spreadsheet sheet through MiniExcel: the header row (1-based, default 1), then one data row per sheet row;
+/// numbers as numbers (formulas give their cached values), dates as ISO date-times, empty cells as empty text.
+/// </summary>
+internal sealed class XlsxRows : ITableRows
+{
+    private readonly IEnumerator<IDictionary<string, object?>> _rows;
+    private readonly string[] _letters;
+    private readonly string _sheet;
+    private IDictionary<string, object?>? _current;
+    private string _cell = string.Empty;
+
+    private XlsxRows(IEnumerator<IDictionary<string, object?>> rows, string sheet, int headerRow, IDictionary<string, object?> header)
+    {
+        _rows = rows;
+        _sheet = sheet;
+        _letters = [.. header.Keys];
+        Header = _letters.Select(k => Text(header[k])).ToArray();
+        Line = headerRow;
+    }
+
+    public IReadOnlyList<string> Header { get; }
+
+    public NumberSyntax Numbers => NumberSyntax.Invariant;
+
+    public int Line { get; private set; }
+
+    public static string[] SheetNames(string path) => [.. MiniExcel.GetSheetNames(path)];
+
+    /// <summary>Opens <paramref name="sheet"/> and reads up to the header row; null when the sheet has no such row.</summary>
+    public static XlsxRows? Open(string path, string sheet, int headerRow)
+    {
+        var rows = MiniExcel.Query(path, useHeaderRow: false, sheetName: sheet).Cast<IDictionary<string, object?>>().GetEnumerator();
+        for (var r = 1; r <= headerRow; r++)
+        {
+            if (!rows.MoveNext())
+            {
+                rows.Dispose();
+                return null;
+            }
+        }
+
+        return new XlsxRows(rows, sheet, headerRow, rows.Current);
+    }
+
+    /// <summary>Column letter of column index <paramref name="column"/>.</summary>
+    public string Letter(int column) => _letters[column];
+
+    public bool Next()
+    {
+        while (_rows.MoveNext())
+        {
+            Line++;
+            _current = _rows.Current;
+            if (_current.Values.Any(v => v is not null && Text(v).Length > 0))
+            {
+                return true;
+            }
+        }
+
+        return false;
+    }
+
+    public ReadOnlySpan<char> Cell(int column)
+    {
+        _cell = _current is not null && _current.TryGetValue(_letters[column], out var v) ? Text(v) : string.Empty;
+        return _cell.AsSpan().Trim();
+    }
+
+    public string Locate(int line, int column) =>
+        "sheet '" + _sheet + "', cell " + _letters[column] + line.ToString(CultureInfo.InvariantCulture);
+
+    public void Dispose() => _rows.Dispose();
+
+    private static string Text(object? value) => value switch
+    {
+        null => string.Empty,
+        double d => d.ToString("R", CultureInfo.InvariantCulture),
+        float f => ((double)f).ToString("R", CultureInfo.InvariantCulture),
+        int i => i.ToString(CultureInfo.InvariantCulture),
+        long l => l.ToString(CultureInfo.InvariantCulture),
+        decimal m => m.ToString(CultureInfo.InvariantCulture),
+        DateTime t => t.ToString("yyyy-MM-ddTHH:mm:ss", CultureInfo.InvariantCulture),
+        bool b => b ? "TRUE" : "FALSE",
+        _ => Convert.ToString(value, CultureInfo.InvariantCulture) ?? string.Empty,
+    };
+}

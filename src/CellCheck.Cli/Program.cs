@@ -13,6 +13,7 @@ internal static class Program
             + "across cells) before trusting it.\n" + ExitCodes.HelpText)
         {
             CheckCommand.Create(output, error),
+            InitCommand.Create(output, error),
             CalibrateCommand.Create(output, error),
         };
         var parse = root.Parse(args);

@@ -26,14 +26,15 @@ public static class CheckRun
 
         var options = new AnalysisOptions(alpha ?? file.Alpha, adjust ?? file.Adjust);
         var spec = ModelSpecs.From(file);
-        var responses = new List<ResponseReport>();
-        for (var r = 0; r < data.Value!.Responses.Count; r++)
-        {
-            responses.Add(ResponseAnalyzer.Analyze(data.Value, r, options, spec));
-        }
+        var responses = DesignAnalyzer.Analyze(data.Value!, options, spec, file.AdjustAcross == AdjustAcross.CellsAndResponses);
 
         var summary = new DesignSummary(designPath, file.DataText, file.Name, file.Factors.Select(f => f.Name).ToArray(),
-            file.RunOrder?.Column, options.Alpha, AdjustName(options.Adjust)) { Blocks = file.Blocks.Select(b => b.Name).ToArray() };
+            file.RunOrder?.Column, options.Alpha, AdjustName(options.Adjust)) 
+        {
+            Blocks = file.Blocks.Select(b => b.Name).ToArray(),
+            AdjustAcross = file.AdjustAcross == AdjustAcross.CellsAndResponses ? "cells-and-responses" : "cells",
+            FilteredOut = data.Value!.FilteredOut,
+        };
         return LoadResult<CheckRunResult>.Success(new CheckRunResult(file, new CheckReport(summary, responses)));
     }
 

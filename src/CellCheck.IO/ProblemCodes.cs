@@ -46,4 +46,5 @@ public static class ProblemCodes
 
     public const string OutputIsInput = "output.is-input";
     public const string OutputUnwritable = "output.unwritable";
+    public const string OutputExists = "output.exists";
 }

@@ -10,4 +10,7 @@ namespace CellCheck.Core.Analysis;
 public sealed record AnalysisOptions(double Alpha = 0.05, AdjustMethod Adjust = AdjustMethod.Holm, CalibrationSettings? Calibration = null)
 {
     public CalibrationSettings Simulation => Calibration ?? CalibrationSettings.Default;
+
+    /// <summary>Within-cell adjusted p-values computed over all responses together; null: adjust within each response.</summary>
+    public JointCellAdjustment? JointCells { get; init; }
 }

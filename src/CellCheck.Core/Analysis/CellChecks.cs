@@ -10,7 +10,7 @@ namespace CellCheck.Core.Analysis;
 /// </summary>
 internal static class CellChecks
 {
-    public static List<CellResult> Run(CellPartition partition, ResidualSet residuals, double origin, AnalysisOptions options)
+    public static List<CellResult> Run(CellPartition partition, ResidualSet residuals, double origin, AnalysisOptions options, string response)
     {
         var count = partition.CellCount;
         var sw = new TestOutcome[count];
@@ -25,8 +25,8 @@ internal static class CellChecks
             moments[c] = Moments.Summarize(partition.Values.Group(c));
         }
 
-        var swAdjusted = Adjust(sw, options.Adjust);
-        var adAdjusted = Adjust(ad, options.Adjust);
+        var swAdjusted = options.JointCells?.Get(response, CheckNames.ShapiroWilk) ?? Adjust(sw, options.Adjust);
+        var adAdjusted = options.JointCells?.Get(response, CheckNames.AndersonDarling) ?? Adjust(ad, options.Adjust);
         var results = new List<CellResult>(count);
         for (var c = 0; c < count; c++)
         {

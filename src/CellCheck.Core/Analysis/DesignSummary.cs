@@ -12,4 +12,10 @@ public sealed record DesignSummary(
 {
     /// <summary>Block (nuisance factor) names.</summary>
     public IReadOnlyList<string> Blocks { get; init; } = [];
+
+    /// <summary>The family of the within-cell adjustment: "cells" or "cells-and-responses".</summary>
+    public string AdjustAcross { get; init; } = "cells";
+
+    /// <summary>Rows left out by the design's row filter.</summary>
+    public int FilteredOut { get; init; }
 }

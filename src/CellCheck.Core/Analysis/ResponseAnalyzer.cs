@@ -21,7 +21,7 @@ public static class ResponseAnalyzer
         var census = CensusBuilder.Build(partition);
         var source = ResidualSources.For(data, spec, ModelName(data, spec));
         var residuals = source.Compute(partition);
-        var cells = CellChecks.Run(partition, residuals, column.Origin, options);
+        var cells = CellChecks.Run(partition, residuals, column.Origin, options, column.Name);
         var pooled = PooledChecks.Run(residuals, options.Alpha);
         var spread = SpreadChecks.Run(partition, residuals, cells, options.Alpha);
         var model = ModelChecks.Run(partition, data.Blocks, spec, residuals, data.SourceLines, options.Alpha);

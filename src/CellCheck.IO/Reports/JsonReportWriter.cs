@@ -67,6 +67,8 @@ public static class JsonReportWriter
 
         w.WriteNumber("alpha", design.Alpha);
         w.WriteString("adjust", design.Adjust);
+        w.WriteString("adjust_across", design.AdjustAcross);
+        w.WriteNumber("rows_filtered_out", design.FilteredOut);
         w.WriteEndObject();
     }
 

@@ -5,7 +5,8 @@ namespace CellCheck.IO.Scaffold;
 
 /// <summary>
 /// Proposes a role for each column from its values (rules of thumb, common practice, no source): a run order when
-/// the name says so (run, order, sequence, time, date) or the numbers are distinct positions 1..n; a block when the
+/// the name says so (run, order, sequence, time, date) or the numbers are distinct increasing whole positions (a run or
+/// plot number); a block when the
 /// name says so (block, day, batch, replicate); a response when most values are numbers and they take many distinct
 /// values (more than 10, or a third of the rows); a factor when the values take few distinct levels; otherwise ignore
 /// (identifiers, free text).
@@ -23,7 +24,7 @@ public static partial class ColumnProfiler
         var sequence = numeric == 1 && distinct == present.Count && present.Count > 2 && sorted[0] >= 0 && sorted.Zip(sorted.Skip(1)).All(p => p.Second > p.First)
             && sorted.All(x => x == Math.Floor(x)) && sorted[^1] - sorted[0] < 2 * present.Count;
         var time = present.Count > 0 && present.All(v => v.Contains('-', StringComparison.Ordinal) && DateTimeOffset.TryParse(v, CultureInfo.InvariantCulture, DateTimeStyles.AssumeUniversal, out _));
-        var role = OrderName().IsMatch(name) && (sequence || time || numeric == 1) ? ColumnRole.RunOrder
+        var role = (OrderName().IsMatch(name) && (sequence || time || numeric == 1)) || sequence ? ColumnRole.RunOrder
             : BlockName().IsMatch(name) && distinct > 1 && distinct < present.Count ? ColumnRole.Block
             : numeric >= 0.9 && (distinct > 10 || distinct * 3 > present.Count) ? ColumnRole.Response
             : distinct > 1 && distinct <= Math.Max(12, present.Count / 4) ? ColumnRole.Factor

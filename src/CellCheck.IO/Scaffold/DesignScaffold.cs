@@ -72,7 +72,7 @@ public static class DesignScaffold
         Section(sb, "blocks", result, ColumnRole.Block, "nuisance groupings (days, batches): in the model, they do not define cells");
         var order = result.Columns.FirstOrDefault(c => c.Role == ColumnRole.RunOrder);
         sb.AppendLine(order is null ? "# run_order: COLUMN          # CHECK: name the column that holds the run sequence, or write run_order: file" : "run_order: " + Quote(order.Name) + "   # CHECK: the sequence in which the runs were made");
-        foreach (var c in result.Columns.Where(c => c.Role == ColumnRole.Ignore))
+        foreach (var c in result.Columns.Where(c => c.Role == ColumnRole.Ignore || (c.Role == ColumnRole.RunOrder && c != order)))
         {
             sb.AppendLine("# not used: " + c.Name + " (" + c.Distinct.ToString(CultureInfo.InvariantCulture) + " distinct values)");
         }

@@ -1,6 +1,7 @@
 using CellCheck.Core.Calibration;
 using CellCheck.Core.Cells;
 using CellCheck.Core.Residuals;
+using CellCheck.Core.Resolution;
 using CellCheck.Core.Statistics;
 
 namespace CellCheck.Core.Analysis;
@@ -13,7 +14,7 @@ namespace CellCheck.Core.Analysis;
 internal static class PrimaryDecisions
 {
     public static List<AssumptionVerdict> Decide(CellPartition partition, ResidualSet residuals, PooledResult pooled, SpreadResult spread,
-        OrderResult order, ShapeCalibration calibration, double alpha)
+        OrderResult order, ShapeCalibration calibration, double alpha, ResolutionSummary? resolution = null, CalibrationSettings? settings = null)
     {
         var choice = calibration.Choice;
         double pNormality, pSpread;
@@ -39,6 +40,15 @@ internal static class PrimaryDecisions
             pSpread = double.IsNaN(spreadStat) ? double.NaN : pSpread;
         }
 
+        var normalityMethod = (string?)null;
+        if (resolution is { Coarse: true, Step: { } step } && choice.Normality != NormalityPrimary.None && residuals.NullPlan.Rows <= (settings ?? CalibrationSettings.Default).MonteCarloLimit)
+        {
+            var plan = residuals.WithinCellShift ? CellMeansPlan.ForLayout(partition.Values.Starts) : residuals.NullPlan;
+            const int Draws = 999;
+            pNormality = RoundedNormality.PValue(plan, choice, residuals.Fitted, residuals.ResidualSd, step, normality, Draws, (settings ?? CalibrationSettings.Default).Seed + 7);
+            normalityMethod = "simulated with values rounded to the recording step " + NumberText.Value(step, 6) + " (" + NumberText.Count(Draws) + " draws)";
+        }
+
         var dw = order.Checks.FirstOrDefault(c => c.Check == CheckNames.DurbinWatson);
         var pOrder = dw?.P ?? double.NaN;
         var adjusted = FamilyDecision.Adjusted([pNormality, pSpread, pOrder]);
@@ -49,7 +59,7 @@ internal static class PrimaryDecisions
         return
         [
             Verdict(AssumptionNames.Normality, choice.Normality == NormalityPrimary.None ? null : normalityCheck, normalityStatistic,
-                pNormality, adjusted[0], alpha, choice.NormalityReason, method,
+                pNormality, adjusted[0], alpha, choice.NormalityReason, normalityMethod ?? method,
                 choice.Normality == NormalityPrimary.None ? NotTestableReason.TooFewValues : NotTestableReason.ZeroSpread),
             Verdict(AssumptionNames.EqualSpread, choice.Spread == SpreadPrimary.None ? null : spreadCheck, spreadStat,
                 pSpread, adjusted[1], alpha, choice.SpreadReason, method,

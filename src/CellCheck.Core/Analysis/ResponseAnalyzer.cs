@@ -3,6 +3,7 @@ using CellCheck.Core.Cells;
 using CellCheck.Core.Data;
 using CellCheck.Core.Models;
 using CellCheck.Core.Residuals;
+using CellCheck.Core.Resolution;
 
 namespace CellCheck.Core.Analysis;
 
@@ -27,12 +28,14 @@ public static class ResponseAnalyzer
         var model = ModelChecks.Run(partition, data.Blocks, spec, residuals, data.SourceLines, options.Alpha);
         var calibration = Calibrator.Calibrate(residuals.NullPlan, options.Alpha, options.Simulation);
         var order = OrderChecks.Run(data, partition, residuals, options.Alpha);
-        var assumptions = PrimaryDecisions.Decide(partition, residuals, pooled, spread, order, calibration, options.Alpha);
-        var verdict = VerdictWriter.Write(new VerdictInputs(census, cells, pooled, spread, partition.Factors, assumptions, calibration.Operating, model), options);
+        var resolution = RecordingStep.Summarize(partition.Values, column.Decimals, residuals.ResidualSd);
+        var assumptions = PrimaryDecisions.Decide(partition, residuals, pooled, spread, order, calibration, options.Alpha, resolution, options.Simulation);
+        var verdict = VerdictWriter.Write(new VerdictInputs(census, cells, pooled, spread, partition.Factors, assumptions, calibration.Operating, model) { Resolution = resolution }, options);
         return new ResponseReport(column.Name, column.Unit, partition.Values.Count, data.Excluded[response], census, cells, pooled, spread, verdict)
         {
             Model = model,
             Order = order,
+            Resolution = resolution,
             Rows = Rows(partition, residuals, data.SourceLines, column.Origin) with
             {
                 RunOrder = data.RunOrder is { } ro ? partition.RowOrder.Select(r => ro[r]).ToArray() : null,

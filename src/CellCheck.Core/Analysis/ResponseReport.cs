@@ -21,6 +21,9 @@ public sealed record ResponseReport(
     /// <summary>Independence in run order.</summary>
     public required OrderResult Order { get; init; }
 
+    /// <summary>How finely the response was recorded, and whether rounding is coarse enough to matter.</summary>
+    public Resolution.ResolutionSummary? Resolution { get; init; }
+
     /// <summary>Per-row diagnostics in cell order.</summary>
     public required RowDiagnostics Rows { get; init; }
 }

@@ -13,4 +13,7 @@ internal sealed record VerdictInputs(
     IReadOnlyList<FactorColumn> Factors,
     IReadOnlyList<AssumptionVerdict> Assumptions,
     OperatingCharacteristics? Operating,
-    ModelResult Model);
+    ModelResult Model)
+{
+    public Resolution.ResolutionSummary? Resolution { get; init; }
+}

@@ -45,6 +45,13 @@ internal static class VerdictWriter
         }
 
         ModelText.Add(x.Model, findings);
+        if (x.Resolution is { Coarse: true } res)
+        {
+            findings.Add("Values are recorded coarsely (step " + NumberText.Value(res.Step ?? double.NaN, 6) + ", "
+                + NumberText.Fixed(100 * res.TiedShare, 0) + "% of values tied within their cell): rounding alone can make normality tests reject, "
+                + "so the normality decision uses a p-value simulated with the same rounding.");
+        }
+
         SupportingText.Add(x, normality, spread, findings);
         NotJudged(x, normality, spread, findings);
         var status = anyFlag ? CheckStatus.Flag : judged.Count == 0 ? CheckStatus.NotTestable : CheckStatus.Pass;

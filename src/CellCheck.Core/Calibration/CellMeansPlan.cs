@@ -14,13 +14,25 @@ public sealed class CellMeansPlan : INullPlan
         {
             CellStarts[c + 1] = CellStarts[c] + shape.Sizes[c];
         }
+
+        Key = "cell-means:" + Shape.Key;
     }
 
-    public string Key => "cell-means:" + Shape.Key;
+    private CellMeansPlan(int[] cellStarts)
+    {
+        CellStarts = cellStarts;
+        Shape = new DesignShape(Enumerable.Range(0, cellStarts.Length - 1).Select(c => cellStarts[c + 1] - cellStarts[c]));
+        Key = "cell-means-layout:" + string.Join(",", cellStarts);
+    }
+
+    /// <summary>A plan over an actual layout of cells in its own order, singletons included (their studentized residuals are NaN).</summary>
+    public static CellMeansPlan ForLayout(int[] cellStarts) => new(cellStarts);
+
+    public string Key { get; }
 
     public DesignShape Shape { get; }
 
-    public int Rows => Shape.Count;
+    public int Rows => CellStarts[^1];
 
     public int UsableResiduals => Shape.Count;
 

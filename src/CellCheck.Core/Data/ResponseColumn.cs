@@ -29,4 +29,8 @@ public sealed class ResponseColumn
 
     /// <summary>Value minus <see cref="Origin"/> per row; NaN where the row is excluded for this response.</summary>
     public double[] Values { get; }
+
+    /// <summary>The most decimal places written in any value (null when unknown, e.g. exponent notation): the
+    /// finest step the values can have been recorded to.</summary>
+    public int? Decimals { get; init; }
 }

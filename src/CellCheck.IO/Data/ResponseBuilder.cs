@@ -15,6 +15,8 @@ internal sealed class ResponseBuilder(string name, string? unit, int capacity, M
     private readonly List<double> _values = new(capacity);
     private readonly List<ExcludedRow> _excluded = [];
     private decimal? _origin;
+    private int? _decimals;
+    private bool _exponentSeen;
 
     /// <summary>The first value that seems to use an undeclared thousands separator (line and text), if any.</summary>
     public (int Line, string Text)? Grouping { get; private set; }
@@ -45,11 +47,13 @@ internal sealed class ResponseBuilder(string name, string? unit, int capacity, M
         {
             _origin ??= exact;
             _values.Add((double)(exact - _origin.Value));
+            _decimals = Math.Max(_decimals ?? 0, exact.Scale);
             return;
         }
 
         if (double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out var value))
         {
+            _exponentSeen = true;
             if (!double.IsFinite(value))
             {
                 Exclude(line, "not-finite", $"not a finite number: '{Clip(raw)}'");
@@ -89,7 +93,7 @@ internal sealed class ResponseBuilder(string name, string? unit, int capacity, M
         }
     }
 
-    public ResponseColumn Build() => new(name, unit, (double)(_origin ?? 0m), [.. _values]);
+    public ResponseColumn Build() => new(name, unit, (double)(_origin ?? 0m), [.. _values]) { Decimals = _exponentSeen ? null : _decimals };
 
     public IReadOnlyList<ExcludedRow> Excluded => _excluded;
 

@@ -50,6 +50,16 @@ internal static class ResponseJson
         }
 
         w.WriteEndArray();
+        if (r.Resolution is { } res)
+        {
+            w.WriteStartObject("resolution");
+            JsonReportWriter.Number(w, "step", res.Step);
+            JsonReportWriter.Number(w, "tied_share", res.TiedShare);
+            JsonReportWriter.Number(w, "step_to_sd", res.StepToSd);
+            w.WriteBoolean("coarse", res.Coarse);
+            w.WriteEndObject();
+        }
+
         ModelJson.Write(w, r.Model);
         OrderJson.Write(w, r.Order);
         WritePooled(w, r.Pooled);

@@ -1,0 +1,58 @@
+using CellCheck.Core.Statistics;
+
+namespace CellCheck.Core.Resolution;
+
+/// <summary>
+/// Estimates the recording step of a response: with values written to at most d decimals, every value is an integer
+/// number of units 10⁻ᵈ; the step is the greatest common divisor of the differences between values, in those units.
+/// Ties are counted within cells (identical values of one cell).
+/// </summary>
+public static class RecordingStep
+{
+    public static ResolutionSummary Summarize(GroupedValues cells, int? decimals, double residualSd)
+    {
+        ArgumentNullException.ThrowIfNull(cells);
+        double? step = null;
+        if (decimals is { } d && d <= 12 && cells.Count > 1)
+        {
+            var unit = Math.Pow(10, -d);
+            long divisor = 0;
+            var first = Math.Round(cells.Values[0] / unit);
+            foreach (var v in cells.Values)
+            {
+                var units = (long)Math.Round(v / unit - first);
+                divisor = Gcd(divisor, Math.Abs(units));
+            }
+
+            step = divisor > 0 ? divisor * unit : null;
+        }
+
+        var tied = 0;
+        var scratch = new double[cells.Count];
+        for (var c = 0; c < cells.GroupCount; c++)
+        {
+            var y = scratch.AsSpan(0, cells.Size(c));
+            cells.Group(c).CopyTo(y);
+            y.Sort();
+            for (var i = 1; i < y.Length; i++)
+            {
+                tied += y[i] == y[i - 1] ? 1 : 0;
+            }
+        }
+
+        var tiedShare = cells.Count == 0 ? 0 : (double)tied / cells.Count;
+        double? ratio = step is { } s && residualSd > 0 ? s / residualSd : null;
+        var coarse = (ratio ?? 0) >= ResolutionSummary.CoarseStepToSd || tiedShare >= ResolutionSummary.CoarseTiedShare;
+        return new ResolutionSummary(step, tiedShare, ratio, coarse);
+    }
+
+    private static long Gcd(long a, long b)
+    {
+        while (b != 0)
+        {
+            (a, b) = (b, a % b);
+        }
+
+        return a;
+    }
+}

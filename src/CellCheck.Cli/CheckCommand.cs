@@ -13,14 +13,15 @@ internal static class CheckCommand
     {
         var design = new Argument<string>("design") { Description = "The design file (YAML) naming the data file, factors and responses." };
         var json = new Option<string?>("--json") { Description = "Write the JSON report to FILE.", HelpName = "FILE" };
-        var outDir = new Option<string?>("--out") { Description = "Write every report (report.json, diagnostics.csv) into folder DIR, creating it if needed.", HelpName = "DIR" };
+        var html = new Option<string?>("--html") { Description = "Write the self-contained HTML report to FILE.", HelpName = "FILE" };
+        var outDir = new Option<string?>("--out") { Description = "Write every report (report.json, report.html, diagnostics.csv) into folder DIR, creating it if needed.", HelpName = "DIR" };
         var adjust = new Option<string?>("--adjust") { Description = "Adjustment of within-cell p-values across cells: holm (default), bh or none.", HelpName = "METHOD" };
         adjust.AcceptOnlyFromAmong("holm", "bh", "none");
         var alpha = new Option<double?>("--alpha") { Description = "Significance level (overrides the design file; default 0.05).", HelpName = "A" };
         var quiet = new Option<bool>("--quiet") { Description = "Print only the verdict lines, not the tables." };
         var command = new Command("check", "Check the assumptions of an ANOVA for every response of a design.\n" + ExitCodes.HelpText)
         {
-            design, json, outDir, adjust, alpha, quiet,
+            design, json, html, outDir, adjust, alpha, quiet,
         };
         command.Options.Add(new VersionOption());
         command.SetAction(parse =>
@@ -52,7 +53,7 @@ internal static class CheckCommand
                 TerminalReportWriter.Write(report, output, ToolVersion.Text);
             }
 
-            var written = ReportOutputs.Write(run.Value, parse.GetValue(json), parse.GetValue(outDir), output, error);
+            var written = ReportOutputs.Write(run.Value, parse.GetValue(json), parse.GetValue(outDir), output, error, parse.GetValue(html));
             if (written != 0)
             {
                 return written;

@@ -1,4 +1,5 @@
 using CellCheck.IO;
+using CellCheck.IO.Html;
 using CellCheck.IO.Reports;
 
 namespace CellCheck.Cli;
@@ -6,7 +7,7 @@ namespace CellCheck.Cli;
 /// <summary>Writes the report files a user asked for, atomically, never over an input.</summary>
 internal static class ReportOutputs
 {
-    public static int Write(CheckRunResult run, string? json, string? outDir, TextWriter output, TextWriter error)
+    public static int Write(CheckRunResult run, string? json, string? outDir, TextWriter output, TextWriter error, string? html = null)
     {
         var targets = new List<string>();
         if (json is not null)
@@ -30,6 +31,33 @@ internal static class ReportOutputs
             }
 
             output.WriteLine("Wrote " + csv);
+        }
+
+        var pages = new List<string>();
+        if (html is not null)
+        {
+            pages.Add(html);
+        }
+
+        if (outDir is not null)
+        {
+            pages.Add(Path.Combine(outDir, "report.html"));
+        }
+
+        if (pages.Count > 0)
+        {
+            var context = new HtmlContext(FileDigest.Sha256(run.Design.DataPath), DateTimeOffset.UtcNow, ToolVersion.Text);
+            var page = System.Text.Encoding.UTF8.GetBytes(HtmlReportWriter.Render(run.Report, context));
+            foreach (var target in pages)
+            {
+                var problem = AtomicFile.Write(target, inputs, s => s.Write(page));
+                if (problem is not null)
+                {
+                    return ProblemPrinter.Print([problem], error);
+                }
+
+                output.WriteLine("Wrote " + target);
+            }
         }
 
         foreach (var target in targets)

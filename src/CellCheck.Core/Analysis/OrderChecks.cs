@@ -123,20 +123,6 @@ internal static class OrderChecks
         }
 
         var kept = OrderedRank.KeptColumns(x);
-        if (kept.Length == p)
-        {
-            return x;
-        }
-
-        var reduced = new double[use.Length, kept.Length];
-        for (var k = 0; k < use.Length; k++)
-        {
-            for (var j = 0; j < kept.Length; j++)
-            {
-                reduced[k, j] = x[k, kept[j]];
-            }
-        }
-
-        return reduced;
+        return kept.Length == p ? x : MatrixColumns.Select(x, kept);
     }
 }

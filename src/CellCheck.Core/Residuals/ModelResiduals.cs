@@ -21,7 +21,7 @@ public sealed class ModelResiduals(IReadOnlyList<FactorColumn> blocks, ModelSpec
         var y = partition.Values.Values;
         var kept = OrderedRank.KeptColumns(design.X);
         var aliased = Enumerable.Range(0, design.ColumnCount).Except(kept).ToArray();
-        var estimable = Columns(design.X, kept);
+        var estimable = MatrixColumns.Select(design.X, kept);
         var fit = LinearFit.Fit(estimable, y);
         var aliasedColumns = aliased.Select(c => design.Columns[c]).ToArray();
         var aliasedTerms = aliased.Select(c => design.ColumnTerm[c]).Where(t => t >= 0).Distinct().Select(t => design.Terms[t]).ToArray();
@@ -32,19 +32,5 @@ public sealed class ModelResiduals(IReadOnlyList<FactorColumn> blocks, ModelSpec
         {
             Diagnostics = new ResidualDiagnostics(fit.Leverage, fit.StudentizedExternal, fit.CooksDistance, info) { Design = design, Fit = fit, Estimable = estimable },
         };
-    }
-
-    private static double[,] Columns(double[,] x, int[] kept)
-    {
-        var result = new double[x.GetLength(0), kept.Length];
-        for (var i = 0; i < x.GetLength(0); i++)
-        {
-            for (var k = 0; k < kept.Length; k++)
-            {
-                result[i, k] = x[i, kept[k]];
-            }
-        }
-
-        return result;
     }
 }

@@ -20,14 +20,9 @@ public static class BrownForsytheZerosRemoved
     {
         ArgumentNullException.ThrowIfNull(groups);
         var part = GroupFilter.AtLeast(groups, 2);
-        if (part.GroupCount < 2)
+        if (GroupFilter.DeviationTestObstacle(part) is { } obstacle)
         {
-            return TestOutcome.NotTestable(NotTestableReason.TooFewGroups);
-        }
-
-        if (GroupFilter.LargestSize(part) == 2)
-        {
-            return TestOutcome.NotTestable(NotTestableReason.AllGroupsOfTwo);
+            return TestOutcome.NotTestable(obstacle);
         }
 
         var deviations = new double[part.Count];

@@ -67,4 +67,9 @@ internal static class GroupFilter
 
         return largest;
     }
+
+    /// <summary>The reason a test on absolute deviations cannot run on these (already filtered) groups, or null:
+    /// fewer than two groups, or every group of two values (the deviations are equal within each pair).</summary>
+    public static string? DeviationTestObstacle(GroupedValues part) =>
+        part.GroupCount < 2 ? NotTestableReason.TooFewGroups : LargestSize(part) == 2 ? NotTestableReason.AllGroupsOfTwo : null;
 }

@@ -1,4 +1,5 @@
 using CellCheck.Core.Analysis;
+using CellCheck.Core.Remedies;
 using CellCheck.Core.Statistics;
 using CellCheck.IO.Data;
 using CellCheck.IO.Design;
@@ -8,8 +9,9 @@ namespace CellCheck.IO;
 /// <summary>Reads a design and its data and runs every check: the whole job between the files and the reports.</summary>
 public static class CheckRun
 {
-    /// <summary>Runs the checks. <paramref name="adjust"/> and <paramref name="alpha"/> override the design file when given.</summary>
-    public static LoadResult<CheckRunResult> Run(string designPath, AdjustMethod? adjust = null, double? alpha = null)
+    /// <summary>Runs the checks. <paramref name="adjust"/> and <paramref name="alpha"/> override the design file when given;
+    /// <paramref name="transform"/> re-runs every check on a transformed response (transformation advice is always given).</summary>
+    public static LoadResult<CheckRunResult> Run(string designPath, AdjustMethod? adjust = null, double? alpha = null, TransformRequest? transform = null)
     {
         var design = DesignReader.Read(designPath);
         if (!design.Ok)
@@ -29,7 +31,8 @@ public static class CheckRun
         var responses = new List<ResponseReport>();
         for (var r = 0; r < data.Value!.Responses.Count; r++)
         {
-            responses.Add(ResponseAnalyzer.Analyze(data.Value, r, options, spec));
+            var report = ResponseAnalyzer.Analyze(data.Value, r, options, spec);
+            responses.Add(report with { Remedy = RemedyAnalyzer.Analyze(data.Value, r, options, spec, report, transform) });
         }
 
         var summary = new DesignSummary(designPath, file.DataText, file.Name, file.Factors.Select(f => f.Name).ToArray(),

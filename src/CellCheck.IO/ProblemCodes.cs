@@ -39,4 +39,7 @@ public static class ProblemCodes
 
     public const string OutputIsInput = "output.is-input";
     public const string OutputUnwritable = "output.unwritable";
+
+    public const string BadTransform = "usage.bad-transform";
+    public const string BadShift = "usage.bad-shift";
 }

@@ -22,7 +22,7 @@ public static class RemedyComparison
         foreach (var a in before.Verdict.Assumptions)
         {
             var b = after.Verdict.Assumptions.FirstOrDefault(x => x.Assumption == a.Assumption);
-            if (b is not null)
+            if (b is not null && (a.Status != CheckStatus.NotTestable || b.Status != CheckStatus.NotTestable))
             {
                 rows.Add(new ComparisonRow(a.Assumption, a.Check, Side(a), Side(b)));
             }

@@ -36,7 +36,7 @@ public static class RemedyAnalyzer
         var spreadLevel = SpreadLevel.Fit(before.Cells.Select(c => c.N).ToArray(), before.Cells.Select(c => c.Mean + shift).ToArray(), before.Cells.Select(c => c.Sd).ToArray());
         var recommendedFit = boxCox ?? yeoJohnson;
         var recommended = recommendedFit is null ? null : PowerLadder.Recommend(recommendedFit);
-        var notes = RemedyNotes.Before(boxCox, yeoJohnson, recommended, nonPositive, y.DefaultIfEmpty(double.NaN).Min(), shift);
+        var notes = RemedyNotes.Before(boxCox, yeoJohnson, recommended, nonPositive, y.DefaultIfEmpty(double.NaN).Min(), y.DefaultIfEmpty(double.NaN).Max(), shift, before.Model.Outliers.Count);
         var (choice, notApplied) = Choose(request, recommended, yeoJohnson, nonPositive);
         ResponseReport? after = null;
         double? slopeAfter = null;

@@ -5,9 +5,14 @@ namespace CellCheck.Core.Remedies;
 /// <summary>The notes of a remedy, in words.</summary>
 internal static class RemedyNotes
 {
-    public static List<string> Before(PowerFit? boxCox, PowerFit? yeoJohnson, TransformChoice? recommended, int nonPositive, double smallest, double shift)
+    public static List<string> Before(PowerFit? boxCox, PowerFit? yeoJohnson, TransformChoice? recommended, int nonPositive, double smallest, double largest, double shift, int outliers)
     {
         var notes = new List<string>();
+        if (outliers > 0 && recommended is { IsIdentity: false })
+        {
+            notes.Add("Outlying rows were found: the estimated power is sensitive to single values, so settle them before choosing a transformation.");
+        }
+
         if (shift != 0)
         {
             notes.Add("As stated, " + NumberText.Value(shift, 6) + " was added to every value before transforming; the estimate and the advice depend on it.");
@@ -21,13 +26,23 @@ internal static class RemedyNotes
                 + "which takes values of any sign.");
         }
 
-        if ((boxCox ?? yeoJohnson) is { AtSearchBound: true } fit)
+        var estimate = boxCox ?? yeoJohnson;
+        var flat = estimate is not null && (estimate.CiLower is null || estimate.CiUpper is null) && estimate.Contains(1);
+        if (flat)
+        {
+            notes.Add("The likelihood is nearly flat in λ" + (boxCox is not null && smallest > 0
+                    ? ": the values span a narrow range for their level (largest / smallest " + NumberText.Value(largest / smallest, 3)
+                      + "), over which every power acts almost linearly"
+                    : string.Empty)
+                + ". The power is not determined by these data, and none is needed.");
+        }
+        else if (estimate is { AtSearchBound: true } fit)
         {
             notes.Add("The estimated power lies at the end of the search range (" + NumberText.Value(fit.SearchLower) + " to "
                 + NumberText.Value(fit.SearchUpper) + "): no power in that range fits well.");
         }
 
-        if (recommended is { IsIdentity: true })
+        if (recommended is { IsIdentity: true } && !flat)
         {
             notes.Add("λ = 1 is inside the 95% interval: no transformation is needed.");
         }

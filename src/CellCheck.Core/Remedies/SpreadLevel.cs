@@ -1,3 +1,5 @@
+using MathNet.Numerics.Distributions;
+
 namespace CellCheck.Core.Remedies;
 
 /// <summary>
@@ -5,7 +7,8 @@ namespace CellCheck.Core.Remedies;
 /// s ∝ m^b, then y^(1−b) (log y at b = 1) has roughly constant spread (Bartlett 1947, "The use of transformations",
 /// Biometrics 3, 39-52, by the delta method: SD(y^p) ≈ |p|·m^(p−1)·SD(y)). b is the least-squares slope of log s on
 /// log m over the cells with at least two values, a positive mean and a positive SD; it needs at least three
-/// such cells and some spread in their means.
+/// such cells and some spread in their means. The interval of the power is the usual t interval of a least-squares
+/// slope (cells − 2 df), which treats the log SDs as independent with equal error (roughly true for equal cell sizes).
 /// </summary>
 public static class SpreadLevel
 {
@@ -66,6 +69,22 @@ public static class SpreadLevel
         }
 
         var slope = sxy / sxx;
-        return new SpreadLevelResult(slope, my - (slope * mx), x.Count, null);
+        var intercept = my - (slope * mx);
+        var sse = 0.0;
+        for (var i = 0; i < x.Count; i++)
+        {
+            var e = y[i] - intercept - (slope * x[i]);
+            sse += e * e;
+        }
+
+        var df = x.Count - 2;
+        var se = Math.Sqrt(sse / df / sxx);
+        var t = StudentT.InvCDF(0, 1, df, 0.975);
+        return new SpreadLevelResult(slope, intercept, x.Count, null)
+        {
+            SlopeStandardError = se,
+            PowerLower = 1 - slope - (t * se),
+            PowerUpper = 1 - slope + (t * se),
+        };
     }
 }

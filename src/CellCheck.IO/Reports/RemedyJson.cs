@@ -23,6 +23,11 @@ internal static class RemedyJson
         w.WriteStartObject("spread_level");
         JsonReportWriter.Number(w, "slope", m.SpreadLevel.Slope);
         JsonReportWriter.Number(w, "power", m.SpreadLevel.Power);
+        w.WriteStartArray("power_ci");
+        Value(w, m.SpreadLevel.PowerLower);
+        Value(w, m.SpreadLevel.PowerUpper);
+        w.WriteEndArray();
+        JsonReportWriter.Number(w, "slope_se", m.SpreadLevel.SlopeStandardError);
         w.WriteNumber("cells", m.SpreadLevel.Cells);
         Text(w, "reason", m.SpreadLevel.Reason);
         JsonReportWriter.Number(w, "slope_after", m.SpreadLevelSlopeAfter);

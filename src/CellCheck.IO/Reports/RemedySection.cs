@@ -35,7 +35,8 @@ internal static class RemedySection
         var sl = m.SpreadLevel;
         console.Write(new Text(sl.Slope is { } b
             ? "Spread versus level (" + NumberText.Count(sl.Cells) + " cells): log SD rises " + NumberText.Value(b, 3) + " per unit log mean; suggested power "
-              + NumberText.Value(sl.Power!.Value, 3) + ".\n"
+              + NumberText.Value(sl.Power!.Value, 3) + " (95% interval " + NumberText.Value(sl.PowerLower!.Value, 3) + " to "
+              + NumberText.Value(sl.PowerUpper!.Value, 3) + ").\n"
             : "Spread versus level not computed: " + sl.Reason + ".\n"));
         console.Write(new Text("Recommended: " + (m.Recommended is { } rec
             ? rec.IsIdentity ? "none" : rec.Name + ", " + rec.Formula(r.Response)

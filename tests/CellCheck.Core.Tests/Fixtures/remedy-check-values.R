@@ -18,7 +18,8 @@ cat("full", profile(function(l) boxcox(full, lambda = l, plotit = FALSE)$y), "\n
 cat("additive at 0, 1, -1, 0.5", boxcox(additive, lambda = c(0, 1, -1, 0.5), plotit = FALSE)$y, "\n")
 # spread versus level over the 12 cells: slope of log SD on log mean, for time and 1/time
 cell <- interaction(po$poison, po$treat); m <- tapply(po$time, cell, mean)
-cat("slope time", coef(lm(log(tapply(po$time, cell, sd)) ~ log(m)))[2], "\n")
+sl <- lm(log(tapply(po$time, cell, sd)) ~ log(m))
+cat("slope time", coef(sl)[2], "se", summary(sl)$coefficients[2, 2], "power interval", rev(1 - confint(sl)[2, ]), "\n")
 cat("slope 1/time on log mean(time)", coef(lm(log(tapply(1 / po$time, cell, sd)) ~ log(m)))[2], "\n")
 # Yeo-Johnson profile likelihood written out from Yeo & Johnson (2000), one-way model on InsectSprays (zero counts)
 ins <- read.csv("insect-sprays.csv")

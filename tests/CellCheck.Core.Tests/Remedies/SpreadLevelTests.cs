@@ -29,6 +29,11 @@ public sealed class SpreadLevelTests
         Close.Relative(1.9770404641263266, fit.Slope!.Value, 1e-12);
         Close.Relative(1 - 1.9770404641263266, fit.Power!.Value, 1e-12);
         Assert.Equal(12, fit.Cells);
+        // R: summary(lm(...))$coefficients[2, 2] = 0.26327604087589446; 1 - confint(lm(...))[2, ] = -1.5636560395990333,
+        // -0.39042488865361991 (t quantile with 10 df from MathNet against R's qt: 1e-10 relative)
+        Close.Relative(0.26327604087589446, fit.SlopeStandardError!.Value, 1e-10);
+        Close.Relative(-1.5636560395990333, fit.PowerLower!.Value, 1e-10);
+        Close.Relative(-0.39042488865361991, fit.PowerUpper!.Value, 1e-10);
     }
 
     [Fact]

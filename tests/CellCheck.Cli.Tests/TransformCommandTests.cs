@@ -39,6 +39,9 @@ public sealed class TransformCommandTests
         var (code, output, _) = CliRunner.Run("check", CliRunner.Design("fluorescence-assay.yaml"), "--transform", "reciprocal");
         Assert.Equal(1, code);
         Assert.Contains("After 1/signal: FLAG !", output, StringComparison.Ordinal);
+        Assert.Contains("Advice: Spread differs and no power transformation removes it", output, StringComparison.Ordinal);
+        Assert.Contains("Welch's (1951) ANOVA", output, StringComparison.Ordinal);
+        Assert.Contains("pre-tests has error rates of its own", output, StringComparison.Ordinal);
     }
 
     [Fact]

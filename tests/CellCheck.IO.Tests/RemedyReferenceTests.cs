@@ -112,4 +112,16 @@ public sealed class RemedyReferenceTests
         Assert.Equal("yeo-johnson:0.28", m.Applied!.Name);
         Assert.NotNull(m.After);
     }
+
+    [Fact]
+    public void A_power_that_overflows_is_not_applied_and_the_rest_goes_on()
+    {
+        using var t = new TempDesign("a,y\n1,1e-70\n1,2e-70\n1,4e-70\n2,3e-70\n2,5e-70\n2,6e-70\n", "data: data.csv\nfactors: [a]\nresponses: [y]\n");
+        var run = CheckRun.Run(t.DesignPath, transform: new TransformRequest(PowerFamily.BoxCox, -5));
+        Assert.True(run.Ok);
+        var m = Assert.Single(run.Value!.Report.Responses).Remedy!;
+        Assert.Equal(RemedyReason.NotFinite, m.NotAppliedReason);
+        Assert.Null(m.After);
+        Assert.NotNull(m.BoxCox);
+    }
 }

@@ -50,18 +50,19 @@ internal static class ProfileLikelihood
         }
 
         var level = max - Cut;
-        return (lambda, max, End(logLikelihood, grid, lambda, level, -1), End(logLikelihood, grid, lambda, level, +1));
+        return (lambda, max, End(logLikelihood, grid, values, lambda, level, -1), End(logLikelihood, grid, values, lambda, level, +1));
     }
 
     /// <summary>The first crossing of <paramref name="level"/> from λ̂ in direction <paramref name="direction"/>,
     /// or null when ℓ stays above it to the end of the grid.</summary>
-    private static double? End(Func<double, double> logLikelihood, double[] grid, double lambda, double level, int direction)
+    private static double? End(Func<double, double> logLikelihood, double[] grid, double[] values, double lambda, double level, int direction)
     {
         var inside = lambda;
-        var points = direction < 0 ? grid.Reverse().Where(g => g < lambda) : grid.Where(g => g > lambda);
-        foreach (var g in points)
+        var points = Enumerable.Range(0, grid.Length).Where(k => direction < 0 ? grid[k] < lambda : grid[k] > lambda);
+        foreach (var k in direction < 0 ? points.Reverse() : points)
         {
-            if (logLikelihood(g) < level)
+            var g = grid[k];
+            if (values[k] < level)
             {
                 var (a, b) = direction < 0 ? (g, inside) : (inside, g);
                 return MathNet.Numerics.RootFinding.Brent.FindRoot(l => logLikelihood(l) - level, a, b, 1e-12, 200);

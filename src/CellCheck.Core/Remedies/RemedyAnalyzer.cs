@@ -41,9 +41,14 @@ public static class RemedyAnalyzer
         ResponseReport? after = null;
         double? slopeAfter = null;
         IReadOnlyList<ComparisonRow> comparison = [];
-        if (choice is not null)
+        var transformed = choice is null ? null : ResponseTransform.Apply(column, partition.RowOrder, choice);
+        if (transformed is not null && !(double.IsFinite(transformed.Origin) && partition.RowOrder.All(r => double.IsFinite(transformed.Values[r]))))
         {
-            var transformed = ResponseTransform.Apply(column, partition.RowOrder, choice);
+            (choice, transformed, notApplied) = (null, null, RemedyReason.NotFinite);
+        }
+
+        if (choice is not null && transformed is not null)
+        {
             var afterData = new DesignData(data.Factors, [transformed], data.SourceLines, [data.Excluded[response]], data.Blocks)
             {
                 RunOrder = data.RunOrder,

@@ -58,6 +58,7 @@ internal static class RemedyNotes
     {
         RemedyReason.NotNeeded => "No transformation was applied: λ = 1 is inside the 95% interval; nothing was re-checked.",
         RemedyReason.NonPositiveValues => "The requested power was not applied: some values are zero or negative. State a shift, or use the Yeo-Johnson family.",
+        RemedyReason.NotFinite => "The requested power was not applied: it takes some values beyond the range of double precision.",
         _ => "No transformation was applied: no power could be estimated for this response"
             + (request.IsAuto ? "." : " in the requested family."),
     };

@@ -22,6 +22,10 @@ public static class RemedyReason
     /// <summary>A transformation was requested but λ = 1 is inside the interval: nothing was applied.</summary>
     public const string NotNeeded = "not-needed";
 
+    /// <summary>The transformed values overflow or underflow double precision (a large |power| on extreme values):
+    /// nothing was re-checked.</summary>
+    public const string NotFinite = "not-finite";
+
     /// <summary>No power could be estimated, so "auto" had nothing to apply.</summary>
     public const string NoEstimate = "no-estimate";
 }

@@ -22,14 +22,14 @@ internal static class RemedySection
             console.Write(new Text(FitLine("Box-Cox", bc) + "\n"));
         }
 
+        if (m.BoxCox is null && m.BoxCoxReason is { } reason)
+        {
+            console.Write(new Text("Box-Cox not computed: " + reason + ".\n"));
+        }
+
         if (m.YeoJohnson is { } yj)
         {
             console.Write(new Text(FitLine("Yeo-Johnson", yj) + "\n"));
-        }
-
-        if (m.BoxCox is null && m.BoxCoxReason is { } reason)
-        {
-            console.Write(new Text("Box-Cox not computed: " + reason + "\n"));
         }
 
         var sl = m.SpreadLevel;

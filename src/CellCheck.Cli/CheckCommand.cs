@@ -1,4 +1,6 @@
 using System.CommandLine;
+using CellCheck.Core.Analysis;
+using CellCheck.Core.Remedies;
 using CellCheck.Core.Statistics;
 using CellCheck.IO;
 using CellCheck.IO.Design;
@@ -19,9 +21,11 @@ internal static class CheckCommand
         adjust.AcceptOnlyFromAmong("holm", "bh", "none");
         var alpha = new Option<double?>("--alpha") { Description = "Significance level (overrides the design file; default 0.05).", HelpName = "A" };
         var quiet = new Option<bool>("--quiet") { Description = "Print only the verdict lines, not the tables." };
+        var transform = new Option<string?>("--transform") { Description = TransformHelp, HelpName = "auto|log|sqrt|reciprocal|power:P|yeo-johnson" };
+        var shift = new Option<double?>("--shift") { Description = "Add C to every response value before the transformation (stated in the report; never done unless asked).", HelpName = "C" };
         var command = new Command("check", "Check the assumptions of an ANOVA for every response of a design.\n" + ExitCodes.HelpText)
         {
-            design, json, html, outDir, adjust, alpha, quiet,
+            design, json, html, outDir, adjust, alpha, quiet, transform, shift,
         };
         command.Options.Add(new VersionOption());
         command.SetAction(parse =>
@@ -34,7 +38,13 @@ internal static class CheckCommand
             }
 
             var method = parse.GetValue(adjust) is { } text ? DesignReader.ParseAdjust(text) : (AdjustMethod?)null;
-            var run = CheckRun.Run(parse.GetValue(design)!, method, a);
+            var request = TransformOption(parse.GetValue(transform), parse.GetValue(shift), error, out var failed);
+            if (failed != 0)
+            {
+                return failed;
+            }
+
+            var run = CheckRun.Run(parse.GetValue(design)!, method, a, request);
             if (!run.Ok)
             {
                 return ProblemPrinter.Print(run.Problems, error);
@@ -45,7 +55,8 @@ internal static class CheckCommand
             {
                 foreach (var r in report.Responses)
                 {
-                    output.WriteLine($"{r.Response}: {StatusWords.Of(r.Verdict.Status)}");
+                    var after = r.Remedy is { After: { } t, Applied: { } applied } ? $" (after {applied.Name}: {StatusWords.Of(t.Verdict.Status)})" : string.Empty;
+                    output.WriteLine($"{r.Response}: {StatusWords.Of(r.Verdict.Status)}{after}");
                 }
             }
             else
@@ -59,8 +70,34 @@ internal static class CheckCommand
                 return written;
             }
 
-            return report.AnyFlag ? ExitCodes.Flagged : ExitCodes.Clean;
+            return report.Responses.Any(r => RemedyStatus.Of(r) == CheckStatus.Flag) ? ExitCodes.Flagged : ExitCodes.Clean;
         });
         return command;
+    }
+
+    private const string TransformHelp = "Re-run every check on a transformed response and show before and after: auto (the recommended "
+        + "power), log, sqrt, reciprocal, reciprocal-sqrt, power:P, yeo-johnson or yeo-johnson:P. The exit code then follows the "
+        + "transformed response's verdict. Without it the report still recommends a transformation.";
+
+    private static TransformRequest? TransformOption(string? text, double? shift, TextWriter error, out int failed)
+    {
+        failed = 0;
+        if (text is null)
+        {
+            if (shift is not null)
+            {
+                failed = ProblemPrinter.Print([TransformParser.ShiftWithoutTransform()], error);
+            }
+
+            return null;
+        }
+
+        var parsed = TransformParser.Parse(text, shift);
+        if (!parsed.Ok)
+        {
+            failed = ProblemPrinter.Print(parsed.Problems, error);
+        }
+
+        return parsed.Value;
     }
 }

@@ -16,6 +16,7 @@ internal static class ExitCodes
     public const int InternalError = 3;
 
     public const string HelpText =
-        "Exit codes: 0 = checks ran, nothing flagged; 1 = checks ran, at least one assumption flagged; "
+        "Exit codes: 0 = checks ran, nothing flagged; 1 = checks ran, at least one assumption flagged (with --transform: "
+        + "in the transformed response); "
         + "2 = bad input or usage; 3 = internal error (please report it).";
 }

@@ -1,4 +1,5 @@
 using CellCheck.Core.Analysis;
+using CellCheck.Core.Remedies;
 using CellCheck.Core.Statistics;
 using CellCheck.IO.Data;
 using CellCheck.IO.Design;
@@ -8,8 +9,9 @@ namespace CellCheck.IO;
 /// <summary>Reads a design and its data and runs every check: the whole job between the files and the reports.</summary>
 public static class CheckRun
 {
-    /// <summary>Runs the checks. <paramref name="adjust"/> and <paramref name="alpha"/> override the design file when given.</summary>
-    public static LoadResult<CheckRunResult> Run(string designPath, AdjustMethod? adjust = null, double? alpha = null)
+    /// <summary>Runs the checks. <paramref name="adjust"/> and <paramref name="alpha"/> override the design file when given;
+    /// <paramref name="transform"/> re-runs every check on a transformed response (transformation advice is always given).</summary>
+    public static LoadResult<CheckRunResult> Run(string designPath, AdjustMethod? adjust = null, double? alpha = null, TransformRequest? transform = null)
     {
         var design = DesignReader.Read(designPath);
         if (!design.Ok)
@@ -26,7 +28,8 @@ public static class CheckRun
 
         var options = new AnalysisOptions(alpha ?? file.Alpha, adjust ?? file.Adjust);
         var spec = ModelSpecs.From(file);
-        var responses = DesignAnalyzer.Analyze(data.Value!, options, spec, file.AdjustAcross == AdjustAcross.CellsAndResponses);
+        var analyzed = DesignAnalyzer.Analyze(data.Value!, options, spec, file.AdjustAcross == AdjustAcross.CellsAndResponses);
+        var responses = analyzed.Select((report, r) => report with { Remedy = RemedyAnalyzer.Analyze(data.Value!, r, options, spec, report, transform) }).ToList();
 
         var summary = new DesignSummary(designPath, file.DataText, file.Name, file.Factors.Select(f => f.Name).ToArray(),
             file.RunOrder?.Column, options.Alpha, AdjustName(options.Adjust)) 

@@ -47,4 +47,7 @@ public static class ProblemCodes
     public const string OutputIsInput = "output.is-input";
     public const string OutputUnwritable = "output.unwritable";
     public const string OutputExists = "output.exists";
+
+    public const string BadTransform = "usage.bad-transform";
+    public const string BadShift = "usage.bad-shift";
 }

@@ -11,7 +11,8 @@ internal static class Program
         File.WriteAllText(Path.Combine(folder, "assay-lab.csv"), AssayLab.Csv());
         File.WriteAllText(Path.Combine(folder, "field-trial.csv"), FieldTrial.Csv());
         File.WriteAllText(Path.Combine(folder, "oven-drift.csv"), OvenDrift.Csv());
-        Console.WriteLine("Wrote coating-cure.csv, assay-lab.csv, field-trial.csv and oven-drift.csv to " + folder);
+        File.WriteAllText(Path.Combine(folder, "fluorescence-assay.csv"), FluorescenceAssay.Csv());
+        Console.WriteLine("Wrote coating-cure.csv, assay-lab.csv, field-trial.csv, oven-drift.csv and fluorescence-assay.csv to " + folder);
         return 0;
     }
 }

@@ -26,4 +26,7 @@ public sealed record ResponseReport(
 
     /// <summary>Per-row diagnostics in cell order.</summary>
     public required RowDiagnostics Rows { get; init; }
+
+    /// <summary>Transformation advice and, when one was applied, the transformed response's report; null when not computed.</summary>
+    public Remedies.RemedyResult? Remedy { get; init; }
 }

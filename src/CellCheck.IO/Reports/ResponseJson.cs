@@ -65,6 +65,7 @@ internal static class ResponseJson
         WritePooled(w, r.Pooled);
         WriteSpread(w, r, factors);
         VerdictJson.Write(w, r.Verdict);
+        RemedyJson.Write(w, r, factors);
         w.WriteEndObject();
     }
 

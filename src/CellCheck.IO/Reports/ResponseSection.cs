@@ -45,6 +45,7 @@ internal static class ResponseSection
 
         Notes(console, r.Spread.Notes);
         ExcludedRows(console, r);
+        RemedySection.Write(console, r);
     }
 
     private static void Notes(IAnsiConsole console, IEnumerable<string> notes)

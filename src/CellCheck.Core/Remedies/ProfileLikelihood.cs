@@ -1,0 +1,76 @@
+using MathNet.Numerics.Distributions;
+
+namespace CellCheck.Core.Remedies;
+
+/// <summary>
+/// Maximises a profile log-likelihood ℓ(λ) over a bounded range and finds its likelihood-ratio interval
+/// (Box &amp; Cox 1964, §4: the approximate 100(1 − α)% region {λ : 2(ℓ(λ̂) − ℓ(λ)) ≤ χ²₁(1 − α)}).
+/// </summary>
+/// <remarks>
+/// ℓ is first evaluated on a grid of step <see cref="GridStep"/> over the range, so that the global maximum on the
+/// grid is found even when ℓ has more than one local maximum; Brent's method (<see cref="BoundedBrent"/>) then
+/// refines it between the grid neighbours. λ̂ is determined to about √ε relative: ℓ is flat at its maximum, so no
+/// optimiser can place it more closely in double precision. The interval ends are the first crossings of the cut
+/// going outward from λ̂ (scanned on the grid, then located by Brent's root finder to 1e-12): when the
+/// region above the cut is not connected, the part holding λ̂ is reported.
+/// </remarks>
+internal static class ProfileLikelihood
+{
+    /// <summary>Grid step for the first scan.</summary>
+    public const double GridStep = 0.05;
+
+    /// <summary>χ²₁(0.95)/2, the drop in log-likelihood that bounds the 95% interval.</summary>
+    public static readonly double Cut = ChiSquared.InvCDF(1, PowerFit.Level) / 2;
+
+    public static (double Lambda, double Max, double? Lower, double? Upper) Maximise(Func<double, double> logLikelihood, double lower, double upper)
+    {
+        var steps = (int)Math.Round((upper - lower) / GridStep);
+        var grid = new double[steps + 1];
+        var values = new double[steps + 1];
+        var best = 0;
+        for (var k = 0; k <= steps; k++)
+        {
+            grid[k] = k == steps ? upper : lower + (k * GridStep);
+            values[k] = logLikelihood(grid[k]);
+            if (values[k] > values[best] || double.IsNaN(values[best]))
+            {
+                best = k;
+            }
+        }
+
+        double lambda = grid[best], max = values[best];
+        if (best > 0 && best < steps)
+        {
+            var refined = BoundedBrent.Minimize(l => -logLikelihood(l), grid[best - 1], grid[best + 1], 1e-12);
+            var value = logLikelihood(refined);
+            if (value >= max)
+            {
+                (lambda, max) = (refined, value);
+            }
+        }
+
+        var level = max - Cut;
+        return (lambda, max, End(logLikelihood, grid, values, lambda, level, -1), End(logLikelihood, grid, values, lambda, level, +1));
+    }
+
+    /// <summary>The first crossing of <paramref name="level"/> from λ̂ in direction <paramref name="direction"/>,
+    /// or null when ℓ stays above it to the end of the grid.</summary>
+    private static double? End(Func<double, double> logLikelihood, double[] grid, double[] values, double lambda, double level, int direction)
+    {
+        var inside = lambda;
+        var points = Enumerable.Range(0, grid.Length).Where(k => direction < 0 ? grid[k] < lambda : grid[k] > lambda);
+        foreach (var k in direction < 0 ? points.Reverse() : points)
+        {
+            var g = grid[k];
+            if (values[k] < level)
+            {
+                var (a, b) = direction < 0 ? (g, inside) : (inside, g);
+                return MathNet.Numerics.RootFinding.Brent.FindRoot(l => logLikelihood(l) - level, a, b, 1e-12, 200);
+            }
+
+            inside = g;
+        }
+
+        return null;
+    }
+}

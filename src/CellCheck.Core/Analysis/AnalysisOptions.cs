@@ -10,4 +10,7 @@ namespace CellCheck.Core.Analysis;
 public sealed record AnalysisOptions(double Alpha = 0.05, AdjustMethod Adjust = AdjustMethod.Holm, CalibrationSettings? Calibration = null)
 {
     public CalibrationSettings Simulation => Calibration ?? CalibrationSettings.Default;
+
+    /// <summary>Simulated data sets per scenario for the sensitivity of the single checks (replicates section).</summary>
+    public int SensitivityDraws { get; init; } = 400;
 }

@@ -23,4 +23,7 @@ public sealed record ResponseReport(
 
     /// <summary>Per-row diagnostics in cell order.</summary>
     public required RowDiagnostics Rows { get; init; }
+
+    /// <summary>Are there enough replicates: census verdict and the sensitivity of the single checks.</summary>
+    public Planning.ReplicatesResult? Replicates { get; init; }
 }

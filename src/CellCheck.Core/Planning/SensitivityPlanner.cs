@@ -14,12 +14,12 @@ namespace CellCheck.Core.Planning;
 public static class SensitivityPlanner
 {
     /// <summary>Largest replicates per cell tried.</summary>
-    public const int SearchLimit = 200;
+    public const int SearchLimit = 100;
 
     /// <summary>Reason code when the target rate is not reached up to <see cref="SearchLimit"/>.</summary>
     public const string BeyondLimit = "beyond-search-limit";
 
-    private static readonly int[] Grid = [3, 4, 5, 6, 8, 10, 12, 16, 20, 25, 32, 40, 50, 64, 80, 100, 128, 160, 200];
+    private static readonly int[] Grid = [3, 4, 5, 6, 8, 10, 12, 16, 20, 25, 32, 40, 50, 64, 80, 100];
 
     public static IReadOnlyList<SensitivityNeed> Plan(int cells, double alpha, AdjustMethod adjust, double target, int draws, int seed)
     {

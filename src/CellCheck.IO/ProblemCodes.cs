@@ -37,6 +37,14 @@ public static class ProblemCodes
     public const string NonNumericLevel = "data.non-numeric-level";
     public const string DuplicateRun = "data.duplicate-run";
 
+    public const string PlanMissingEffect = "plan.missing-effect";
+    public const string PlanBadEffect = "plan.bad-effect";
+    public const string PlanBadSd = "plan.bad-sd";
+    public const string PlanBadPower = "plan.bad-power";
+    public const string PlanBadAlpha = "plan.bad-alpha";
+    public const string PlanBadDraws = "plan.bad-draws";
+    public const string PlanUnknownResponse = "plan.unknown-response";
+
     public const string OutputIsInput = "output.is-input";
     public const string OutputUnwritable = "output.unwritable";
 }

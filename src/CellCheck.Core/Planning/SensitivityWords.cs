@@ -6,7 +6,8 @@ namespace CellCheck.Core.Planning;
 
 /// <summary>
 /// The replicates section in plain words: the census verdict and why, the best chance any normality check and any
-/// spread check had to see its departure, and the checks that flag clean data more often than alpha at these sizes.
+/// spread check that holds its alpha at these sizes had to see its departure, and the checks that flag clean data
+/// more often than alpha (the lower end of the Wilson interval of their false-alarm rate above alpha).
 /// </summary>
 /// <remarks>
 /// A chance of at least 0.80 is read as "would likely have been seen" (Cohen's 1988 convention for adequate power,
@@ -50,7 +51,10 @@ public static class SensitivityWords
 
     private static void Best(List<string> lines, SensitivityTable table, Departure departure, string what)
     {
-        var best = table.Rows.Where(r => r.Departure == departure && r.Catches is not null).MaxBy(r => r.Catches!.Rate);
+        // among the checks that hold their alpha here (a liberal check's catches are partly false alarms), or all if none does
+        var candidates = table.Rows.Where(r => r.Departure == departure && r.Catches is not null).ToList();
+        var honest = candidates.Where(r => r.FalseAlarm is { } f && f.Lower <= table.Alpha).ToList();
+        var best = (honest.Count > 0 ? honest : candidates).MaxBy(r => r.Catches!.Rate);
         if (best is null)
         {
             return;

@@ -18,9 +18,10 @@ internal static class CheckCommand
         adjust.AcceptOnlyFromAmong("holm", "bh", "none");
         var alpha = new Option<double?>("--alpha") { Description = "Significance level (overrides the design file; default 0.05).", HelpName = "A" };
         var quiet = new Option<bool>("--quiet") { Description = "Print only the verdict lines, not the tables." };
+        var sensitivityDraws = new Option<int?>("--sensitivity-draws") { Description = "Simulated data sets per scenario for the checks' sensitivity table (default 400).", HelpName = "N" };
         var command = new Command("check", "Check the assumptions of an ANOVA for every response of a design.\n" + ExitCodes.HelpText)
         {
-            design, json, outDir, adjust, alpha, quiet,
+            design, json, outDir, adjust, alpha, quiet, sensitivityDraws,
         };
         command.Options.Add(new VersionOption());
         command.SetAction(parse =>
@@ -32,8 +33,14 @@ internal static class CheckCommand
                 return ExitCodes.BadInput;
             }
 
+            if (parse.GetValue(sensitivityDraws) is < 10)
+            {
+                error.WriteLine("error [usage] --sensitivity-draws must be at least 10.");
+                return ExitCodes.BadInput;
+            }
+
             var method = parse.GetValue(adjust) is { } text ? DesignReader.ParseAdjust(text) : (AdjustMethod?)null;
-            var run = CheckRun.Run(parse.GetValue(design)!, method, a);
+            var run = CheckRun.Run(parse.GetValue(design)!, method, a, parse.GetValue(sensitivityDraws));
             if (!run.Ok)
             {
                 return ProblemPrinter.Print(run.Problems, error);

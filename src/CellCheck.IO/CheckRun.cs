@@ -8,8 +8,9 @@ namespace CellCheck.IO;
 /// <summary>Reads a design and its data and runs every check: the whole job between the files and the reports.</summary>
 public static class CheckRun
 {
-    /// <summary>Runs the checks. <paramref name="adjust"/> and <paramref name="alpha"/> override the design file when given.</summary>
-    public static LoadResult<CheckRunResult> Run(string designPath, AdjustMethod? adjust = null, double? alpha = null)
+    /// <summary>Runs the checks. <paramref name="adjust"/> and <paramref name="alpha"/> override the design file when given;
+    /// <paramref name="sensitivityDraws"/> sets the simulated data sets per scenario of the checks' sensitivity table.</summary>
+    public static LoadResult<CheckRunResult> Run(string designPath, AdjustMethod? adjust = null, double? alpha = null, int? sensitivityDraws = null)
     {
         var design = DesignReader.Read(designPath);
         if (!design.Ok)
@@ -25,6 +26,7 @@ public static class CheckRun
         }
 
         var options = new AnalysisOptions(alpha ?? file.Alpha, adjust ?? file.Adjust);
+        options = sensitivityDraws is { } draws ? options with { SensitivityDraws = draws } : options;
         var spec = ModelSpecs.From(file);
         var responses = new List<ResponseReport>();
         for (var r = 0; r < data.Value!.Responses.Count; r++)

@@ -15,8 +15,8 @@ internal static class ReplicatesSection
             return;
         }
 
-        console.Write(new Text($"Replicates: {SensitivityWords.Word(rep.Census.Level)} (rule: {rep.Census.Rule}).\n"));
-        foreach (var line in rep.Summary.Skip(1))
+        console.Write(new Text($"Replicates: {SensitivityWords.Word(rep.Census.Level)}. Rule: {rep.Census.Rule}.\n"));
+        foreach (var line in rep.Summary)
         {
             console.Write(new Padder(new Text("- " + line), new Padding(2, 0, 0, 0)));
         }

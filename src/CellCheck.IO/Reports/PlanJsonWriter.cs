@@ -73,7 +73,7 @@ public static class PlanJsonWriter
             w.WriteString("check", c.Check);
             w.WriteString("scope", c.Scope);
             w.WriteString("departure", ReplicatesJson.DepartureName(c.Departure));
-            Integer(w, "replicates_needed", c.Needed);
+            JsonReportWriter.Number(w, "replicates_needed", c.Needed);
             ReplicatesJson.Rate(w, "at_needed", c.Needed is null ? null : c.AtNeeded);
             ReplicatesJson.Rate(w, "below_needed", c.BelowNeeded);
             ReplicatesJson.Rate(w, "at_search_limit", c.Needed is null ? c.AtNeeded : null);
@@ -107,7 +107,7 @@ public static class PlanJsonWriter
             w.WriteString("term", t.Term);
             w.WriteNumber("df", t.Df1);
             Power(w, "now", t.Current);
-            Integer(w, "replicates_needed", t.Needed);
+            JsonReportWriter.Number(w, "replicates_needed", t.Needed);
             JsonReportWriter.Number(w, "replicates_exact", t.ExactNeeded);
             Power(w, "at_needed", t.AtNeeded);
             Power(w, "below_needed", t.BelowNeeded);
@@ -133,17 +133,5 @@ public static class PlanJsonWriter
         w.WriteNumber("lambda", p.Lambda);
         JsonReportWriter.Number(w, "power", p.Power);
         w.WriteEndObject();
-    }
-
-    private static void Integer(Utf8JsonWriter w, string name, int? value)
-    {
-        if (value is { } v)
-        {
-            w.WriteNumber(name, v);
-        }
-        else
-        {
-            w.WriteNull(name);
-        }
     }
 }

@@ -42,13 +42,11 @@ internal static class ReplicatesSection
             table.AddRow(
                 TerminalReportWriter.Plain(row.Check),
                 TerminalReportWriter.Plain(row.Scope),
-                TerminalReportWriter.Plain(row.Catches is { } c ? Percent(c.Rate) : "not-testable"),
-                TerminalReportWriter.Plain(row.Catches is { } d ? Percent(d.Lower) + " to " + Percent(d.Upper) : row.Reason ?? "-"),
-                TerminalReportWriter.Plain(row.FalseAlarm is { } f ? Percent(f.Rate) : "-"));
+                TerminalReportWriter.Plain(row.Catches is { } c ? PlanText.Percent(c.Rate) : "not-testable"),
+                TerminalReportWriter.Plain(row.Catches is { } d ? PlanText.Percent(d.Lower) + " to " + PlanText.Percent(d.Upper) : row.Reason ?? "-"),
+                TerminalReportWriter.Plain(row.FalseAlarm is { } f ? PlanText.Percent(f.Rate) : "-"));
         }
 
         console.Write(table);
     }
-
-    private static string Percent(double rate) => NumberText.Fixed(100 * rate, 0) + "%";
 }

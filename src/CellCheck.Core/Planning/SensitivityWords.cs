@@ -27,7 +27,7 @@ public static class SensitivityWords
         var sizes = census.MinReplicates == census.MaxReplicates
             ? NumberText.Count(census.MinReplicates)
             : NumberText.Count(census.MinReplicates) + " to " + NumberText.Count(census.MaxReplicates);
-        var head = $"Replication is {Word(verdict.Level)} ({sizes} values per cell, {NumberText.Count(residualDf)} residual df)";
+        var head = $"Census verdict {Word(verdict.Level)} ({sizes} value(s) per cell, {NumberText.Count(residualDf)} residual df)";
         lines.Add(verdict.Reasons.Count == 0 ? head + "." : head + ": " + string.Join("; ", verdict.Reasons) + ".");
         Best(lines, table, Departure.Lognormal, "a lognormal cell (shape 0.5)");
         Best(lines, table, Departure.VarianceRatio4, "a 4:1 variance ratio in one cell");

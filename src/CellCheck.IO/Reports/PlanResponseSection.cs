@@ -12,12 +12,13 @@ internal static class PlanResponseSection
         var unit = r.Unit is null ? string.Empty : " " + r.Unit;
         console.Write(new Rule(Markup.Escape($"Response {r.Response}{(r.Unit is null ? string.Empty : " (" + r.Unit + ")")}")) { Justification = Justify.Left });
         var balanced = r.Balanced ? string.Empty : " on average (unbalanced; the plan assumes every cell equal)";
-        var sd = r.SdFromData
-            ? $"within-cell SD {NumberText.Value(r.Sd)}{unit} from the data (pooled residual SD, {NumberText.Count(r.SdDf)} df)"
-            : $"within-cell SD {NumberText.Value(r.Sd)}{unit} as given";
+        var sd = r.Reason is not null ? "no within-cell SD"
+            : r.SdFromData
+                ? $"within-cell SD {NumberText.Value(r.Sd)}{unit} from the data (pooled residual SD, {NumberText.Count(r.SdDf)} df)"
+                : $"within-cell SD {NumberText.Value(r.Sd)}{unit} as given";
         var df2 = plan.Design.ResidualDf(r.CurrentReplicates);
         var residual = df2 >= 1 ? $", {NumberText.Value(df2)} residual df in the planned model" : string.Empty;
-        console.Write(new Text($"Now: {NumberText.Count(r.CurrentReplicates)} replicates per cell{balanced}{residual}; {sd}.\n"));
+        console.Write(new Text($"Now: {NumberText.Count(r.CurrentReplicates)} replicate(s) per cell{balanced}{residual}; {sd}.\n"));
         if (r.Reason is not null)
         {
             console.Write(new Text("Not planned: the data leave no residual degrees of freedom to estimate the SD. Give it with --sd.\n"));

@@ -5,7 +5,7 @@ namespace CellCheck.Core.Planning;
 /// <summary>
 /// Power of the F test of one term of a balanced factorial ANOVA: P(F' &gt; F_{1−α}(ν1, ν2)) with F' noncentral F
 /// (<see cref="NoncentralF"/>), ν1 the term's degrees of freedom, ν2 the design's residual degrees of freedom with n
-/// replicates per cell, and λ = n·Σ_cells τ² / σ² for term effects τ (Scheffé 1959, The Analysis of Variance, ch. 2;
+/// replicates per cell, and λ = n·Σ_cells τ² / σ² for term effects τ (Scheffé 1959, The Analysis of Variance, Wiley;
 /// Cohen 1988, Statistical Power Analysis for the Behavioral Sciences, ch. 8).
 /// </summary>
 /// <remarks>
@@ -14,7 +14,8 @@ namespace CellCheck.Core.Planning;
 /// mean, λ = n·(cells / levels)·Δ²/(2σ²); for an interaction of k factors a difference of differences Δ between two
 /// levels of each of its factors and every other contrast of the term zero, which divides by 2^k instead of 2. A factor
 /// declared numeric enters as a linear term: Δ is then the change across its range, and its factor ½ becomes
-/// Σ(x − x̄)² / (x_max − x_min)² over its levels. Cohen's f gives λ = f²·N with N = n·cells (Cohen 1988, section 8.3).
+/// Σ(x − x̄)² / (x_max − x_min)² over its levels. Cohen's f is the SD of the effects over the cells in units of σ,
+/// f² = (Σ_cells τ² / cells) / σ², so λ = f²·N with N = n·cells.
 /// </remarks>
 public static class FactorialPower
 {

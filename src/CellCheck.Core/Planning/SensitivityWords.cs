@@ -10,8 +10,8 @@ namespace CellCheck.Core.Planning;
 /// more often than alpha (the lower end of the Wilson interval of their false-alarm rate above alpha).
 /// </summary>
 /// <remarks>
-/// A chance of at least 0.80 is read as "would likely have been seen" (Cohen's 1988 convention for adequate power,
-/// section 2.4); below 0.50 as "a pass says little" (common practice, no source).
+/// A chance of at least 0.80 is read as "would likely have been seen" (Cohen's 1988 convention for adequate power);
+/// below 0.50 as "a pass says little" (common practice, no source).
 /// </remarks>
 public static class SensitivityWords
 {

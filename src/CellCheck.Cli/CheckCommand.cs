@@ -23,9 +23,10 @@ internal static class CheckCommand
         var quiet = new Option<bool>("--quiet") { Description = "Print only the verdict lines, not the tables." };
         var transform = new Option<string?>("--transform") { Description = TransformHelp, HelpName = "auto|log|sqrt|reciprocal|power:P|yeo-johnson" };
         var shift = new Option<double?>("--shift") { Description = "Add C to every response value before the transformation (stated in the report; never done unless asked).", HelpName = "C" };
+        var sensitivityDraws = new Option<int?>("--sensitivity-draws") { Description = "Simulated data sets per scenario for the checks' sensitivity table (default 400).", HelpName = "N" };
         var command = new Command("check", "Check the assumptions of an ANOVA for every response of a design.\n" + ExitCodes.HelpText)
         {
-            design, json, html, outDir, adjust, alpha, quiet, transform, shift,
+            design, json, html, outDir, adjust, alpha, quiet, transform, shift, sensitivityDraws,
         };
         command.Options.Add(new VersionOption());
         command.SetAction(parse =>
@@ -37,6 +38,12 @@ internal static class CheckCommand
                 return ExitCodes.BadInput;
             }
 
+            if (parse.GetValue(sensitivityDraws) is < 10)
+            {
+                error.WriteLine("error [usage] --sensitivity-draws must be at least 10.");
+                return ExitCodes.BadInput;
+            }
+
             var method = parse.GetValue(adjust) is { } text ? DesignReader.ParseAdjust(text) : (AdjustMethod?)null;
             var request = TransformOption(parse.GetValue(transform), parse.GetValue(shift), error, out var failed);
             if (failed != 0)
@@ -44,7 +51,7 @@ internal static class CheckCommand
                 return failed;
             }
 
-            var run = CheckRun.Run(parse.GetValue(design)!, method, a, request);
+            var run = CheckRun.Run(parse.GetValue(design)!, method, a, request, parse.GetValue(sensitivityDraws));
             if (!run.Ok)
             {
                 return ProblemPrinter.Print(run.Problems, error);

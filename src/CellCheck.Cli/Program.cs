@@ -15,6 +15,7 @@ internal static class Program
             CheckCommand.Create(output, error),
             InitCommand.Create(output, error),
             CalibrateCommand.Create(output, error),
+            PlanCommand.Create(output, error),
         };
         var parse = root.Parse(args);
         if (parse.Errors.Count > 0)

@@ -44,6 +44,14 @@ public static class ProblemCodes
     public const string EmptyHeader = "data.empty-header";
     public const string NoRowsLeft = "data.no-rows-left";
 
+    public const string PlanMissingEffect = "plan.missing-effect";
+    public const string PlanBadEffect = "plan.bad-effect";
+    public const string PlanBadSd = "plan.bad-sd";
+    public const string PlanBadPower = "plan.bad-power";
+    public const string PlanBadAlpha = "plan.bad-alpha";
+    public const string PlanBadDraws = "plan.bad-draws";
+    public const string PlanUnknownResponse = "plan.unknown-response";
+
     public const string OutputIsInput = "output.is-input";
     public const string OutputUnwritable = "output.unwritable";
     public const string OutputExists = "output.exists";

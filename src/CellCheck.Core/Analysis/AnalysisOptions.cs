@@ -13,4 +13,7 @@ public sealed record AnalysisOptions(double Alpha = 0.05, AdjustMethod Adjust = 
 
     /// <summary>Within-cell adjusted p-values computed over all responses together; null: adjust within each response.</summary>
     public JointCellAdjustment? JointCells { get; init; }
+
+    /// <summary>Simulated data sets per scenario for the sensitivity of the single checks (replicates section).</summary>
+    public int SensitivityDraws { get; init; } = 400;
 }

@@ -36,6 +36,7 @@ public static class ResponseAnalyzer
             Model = model,
             Order = order,
             Resolution = resolution,
+            Replicates = Planning.ReplicatesAssessor.Assess(census, residuals, options),
             Rows = Rows(partition, residuals, data.SourceLines, column.Origin) with
             {
                 RunOrder = data.RunOrder is { } ro ? partition.RowOrder.Select(r => ro[r]).ToArray() : null,

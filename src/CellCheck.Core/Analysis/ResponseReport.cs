@@ -29,4 +29,7 @@ public sealed record ResponseReport(
 
     /// <summary>Transformation advice and, when one was applied, the transformed response's report; null when not computed.</summary>
     public Remedies.RemedyResult? Remedy { get; init; }
+
+    /// <summary>Are there enough replicates: census verdict and the sensitivity of the single checks.</summary>
+    public Planning.ReplicatesResult? Replicates { get; init; }
 }

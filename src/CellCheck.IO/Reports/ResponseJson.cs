@@ -34,6 +34,7 @@ internal static class ResponseJson
         w.WriteEndArray();
         w.WriteEndObject();
         WriteCensus(w, r, factors);
+        ReplicatesJson.Write(w, r.Replicates);
         w.WriteStartArray("cells");
         foreach (var cell in r.Cells)
         {

@@ -33,6 +33,8 @@ internal static class ResponseSection
             console.Write(new Text("Empty: " + listed + (c.EmptyCount > 10 ? $"; and {c.EmptyCount - 10} more" : string.Empty) + "\n"));
         }
 
+        ReplicatesSection.Write(console, r);
+
         console.WriteLine();
         CellTable.Write(console, r, factors);
         CheckTable.Write(console, "Supporting: pooled residuals (" + r.Pooled.Residuals + ", internally studentized, n = " + NumberText.Count(r.Pooled.N) + ", asymptotic p)", r.Pooled.Checks);

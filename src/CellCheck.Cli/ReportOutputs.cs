@@ -1,4 +1,5 @@
 using CellCheck.IO;
+using CellCheck.IO.Plots;
 using CellCheck.IO.Reports;
 
 namespace CellCheck.Cli;
@@ -6,7 +7,8 @@ namespace CellCheck.Cli;
 /// <summary>Writes the report files a user asked for, atomically, never over an input.</summary>
 internal static class ReportOutputs
 {
-    public static int Write(CheckRunResult run, string? json, string? outDir, TextWriter output, TextWriter error)
+    /// <param name="pictureDpi">With <paramref name="outDir"/>, the PNG resolution of the pictures; null writes none.</param>
+    public static int Write(CheckRunResult run, string? json, string? outDir, int? pictureDpi, TextWriter output, TextWriter error)
     {
         var targets = new List<string>();
         if (json is not null)
@@ -41,6 +43,20 @@ internal static class ReportOutputs
             }
 
             output.WriteLine("Wrote " + target);
+        }
+
+        if (outDir is not null && pictureDpi is { } dpi)
+        {
+            var (pictures, problem) = PictureFiles.Write(run.Report, outDir, inputs, dpi);
+            foreach (var path in pictures)
+            {
+                output.WriteLine("Wrote " + path);
+            }
+
+            if (problem is not null)
+            {
+                return ProblemPrinter.Print([problem], error);
+            }
         }
 
         return 0;

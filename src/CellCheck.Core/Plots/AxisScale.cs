@@ -24,8 +24,7 @@ public static class AxisScale
         new(label, min, max, LinearTicks(min, max, ticks));
 
     /// <summary>
-    /// A log axis for positive data in [lo, hi]: positions are log10 of the data; ticks at round data values
-    /// (round linear steps within one decade, 1-2-5 steps across decades).
+    /// A log axis for positive data in [lo, hi]: positions are log10 of the data, ticks at round data values.
     /// </summary>
     public static Axis Log10(string label, double lo, double hi)
     {
@@ -38,42 +37,49 @@ public static class AxisScale
         var pad = (b - a) * Padding;
         var min = a - pad;
         var max = b + pad;
-        var low = Math.Pow(10, min);
-        var high = Math.Pow(10, max);
-        var ticks = new List<Tick>();
-        if (max - min < 1.0)
+        return new Axis(label, min, max, LogTicks(min, max));
+    }
+
+    /// <summary>Ticks of a log axis spanning [min, max] in log10 units: powers of ten across three decades or more,
+    /// else across a decade or more the coarser of 1-2-5 and 1-1.5-2-3-5-7 times powers of ten that gives three ticks; over
+    /// less than a decade (or when neither gives three) round linear steps of the data values.</summary>
+    private static List<Tick> LogTicks(double min, double max)
+    {
+        double[][] sets = max - min >= 3 ? [[1]] : [[1, 2, 5], [1, 1.5, 2, 3, 5, 7]];
+        foreach (var set in max - min >= 1 ? sets : [])
         {
-            foreach (var t in LinearTicks(low, high, 4))
-            {
-                if (t.Value > 0)
-                {
-                    ticks.Add(new Tick(Math.Log10(t.Value), t.Label));
-                }
-            }
-        }
-        else
-        {
+            var ticks = new List<Tick>();
             for (var e = (int)Math.Floor(min); e <= (int)Math.Ceiling(max); e++)
             {
-                foreach (var m in (double[])[1, 2, 5])
+                foreach (var m in set)
                 {
                     var v = m * Math.Pow(10, e);
                     var at = Math.Log10(v);
-                    if (at >= min && at <= max && (max - min < 3 || m == 1))
+                    if (at >= min - 1e-12 && at <= max + 1e-12)
                     {
                         ticks.Add(new Tick(at, PlotText.Value(v, 3)));
                     }
                 }
             }
+
+            if (ticks.Count >= 3)
+            {
+                return ticks;
+            }
         }
 
-        return new Axis(label, min, max, ticks);
+        return [.. LinearTicks(Math.Pow(10, min), Math.Pow(10, max)).Where(t => t.Value > 0).Select(t => new Tick(Math.Log10(t.Value), t.Label))];
     }
 
     /// <summary>Round ticks within [min, max], about <paramref name="count"/> of them.</summary>
     public static IReadOnlyList<Tick> LinearTicks(double min, double max, int count = 5)
     {
         var step = NiceStep((max - min) / Math.Max(1, count - 1));
+        if (Math.Floor((max / step) + 1e-9) - Math.Ceiling((min / step) - 1e-9) + 1 < Math.Max(3, count - 2))
+        {
+            step = SmallerStep(step);
+        }
+
         var decimals = Decimals(step);
         var first = Math.Ceiling((min / step) - 1e-9);
         var ticks = new List<Tick>();
@@ -104,6 +110,20 @@ public static class AxisScale
         }
 
         return 10 * power;
+    }
+
+    /// <summary>The next smaller of the steps 1, 2, 2.5, 5 times a power of ten.</summary>
+    private static double SmallerStep(double step)
+    {
+        var power = Math.Pow(10, Math.Floor(Math.Log10(step) + 1e-9));
+        var m = step / power;
+        return m switch
+        {
+            > 4.9 => 2.5 * power,
+            > 2.4 => 2 * power,
+            > 1.9 => power,
+            _ => 0.5 * power,
+        };
     }
 
     private static int Decimals(double step)

@@ -39,8 +39,10 @@ public static class CellGridPlot
         var values = shown.SelectMany(c => members[c]).Select(i => rows.Residuals[i]).Where(double.IsFinite).ToArray();
         var y = AxisScale.Linear(PlotText.WithUnit("residual", report.Unit), values.DefaultIfEmpty(-1).Min(), values.DefaultIfEmpty(1).Max());
         var largest = shown.Length == 0 ? 0 : shown.Max(c => members[c].Count);
-        var reach = largest >= options.MinQq ? NormalScores.Blom(largest)[^1] : 1.0;
-        var x = AxisScale.Linear("normal quantile", -reach, reach);
+        // with no QQ panel every cell is a dot strip and the x axis means nothing: no ticks, no title
+        var x = largest >= options.MinQq
+            ? AxisScale.Linear("normal quantile", -NormalScores.Blom(largest)[^1], NormalScores.Blom(largest)[^1])
+            : new Axis(string.Empty, -1.3, 1.3, []);
 
         var envelopes = new Dictionary<int, QqEnvelope>();
         var panels = new List<Panel>();
@@ -92,8 +94,8 @@ public static class CellGridPlot
     {
         ArgumentNullException.ThrowIfNull(options);
         return "Envelope: " + NumberText.Count(options.Draws) + " normal samples of the same size (seed " + NumberText.Count(options.Seed)
-            + "), each standardised by its own quartile line; at each position the band runs between the 5th smallest and 5th largest, "
-            + "mapped through the plotted line. A point outside it is unusual at that position alone.";
+            + "), each standardised by its own mean and SD; at each position the band runs from the 5th smallest to the 5th largest, "
+            + "scaled by the plotted values' mean and SD. It is pointwise: a point outside it is unusual at that position alone.";
     }
 
     private static Panel CellPanel(int index, CellResult cell, List<int> member, RowDiagnostics rows, Dictionary<int, OutlierRow> outliers, bool flagged,
@@ -115,8 +117,13 @@ public static class CellGridPlot
                 envelopes[n] = envelope;
             }
 
-            var (lower, upper) = envelope.Map(line);
-            series.Add(new BandSeries(SeriesRole.Envelope, xs, lower, upper));
+            var (mean, sd) = QqEnvelopes.MeanSd(sorted);
+            if (sd > 0)
+            {
+                var (lower, upper) = envelope.Map(mean, sd);
+                series.Add(new BandSeries(SeriesRole.Envelope, xs, lower, upper));
+            }
+
             series.Add(new StraightLine(SeriesRole.Reference, line.Intercept, line.Slope));
         }
         else
@@ -159,12 +166,12 @@ public static class CellGridPlot
         }
         else
         {
-            lines.Add(label + " = " + PlotText.P(sw.PAdjusted ?? sw.P ?? double.NaN));
+            lines.Add(PlotText.PIs(label, sw.PAdjusted ?? sw.P ?? double.NaN));
         }
 
         foreach (var other in cell.Checks.Where(k => k.Check != CheckNames.ShapiroWilk && k.Status == CheckStatus.Flag))
         {
-            lines.Add(PlotText.CheckName(other.Check) + " " + label + " = " + PlotText.P(other.PAdjusted ?? other.P ?? double.NaN));
+            lines.Add(PlotText.PIs(PlotText.CheckName(other.Check) + " " + label, other.PAdjusted ?? other.P ?? double.NaN));
         }
 
         var named = outlierLines.ToArray();

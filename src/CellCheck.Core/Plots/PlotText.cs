@@ -32,6 +32,13 @@ public static class PlotText
     /// <summary>A p-value as the reports print it.</summary>
     public static string P(double p) => NumberText.P(p);
 
+    /// <summary>"name = p", or "name &lt; 0.0001" for the smallest p-values.</summary>
+    public static string PIs(string name, double p)
+    {
+        var text = NumberText.P(p);
+        return text.StartsWith('<') ? name + " " + text : name + " = " + text;
+    }
+
     /// <summary>"name (unit)", or the name alone.</summary>
     public static string WithUnit(string name, string? unit) => string.IsNullOrEmpty(unit) ? name : name + " (" + unit + ")";
 

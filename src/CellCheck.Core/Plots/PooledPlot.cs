@@ -11,6 +11,10 @@ namespace CellCheck.Core.Plots;
 /// </summary>
 public static class PooledPlot
 {
+    /// <summary>Smallest ratio of the largest to the smallest cell mean for which a spread-level slope is fitted: over a
+    /// narrower range of levels the slope is mostly noise.</summary>
+    public const double MinLevelRatio = 1.25;
+
     private const string Studentized = "studentized residual";
 
     public static PlotModel Build(DesignSummary design, ResponseReport report, PlotOptions options)
@@ -32,7 +36,7 @@ public static class PooledPlot
             Qq(report, rows, finite, outliers, options),
             AgainstFitted(report, rows, finite, outliers),
             RunOrder(design, report, rows, finite, outliers, notes),
-            SpreadLevel(report, notes),
+            SpreadLevel(design, report, notes),
         ];
         if (panels[0].Series.Any(s => s.Role == SeriesRole.Envelope))
         {
@@ -65,7 +69,8 @@ public static class PooledPlot
         var xs = NormalScores.Blom(n);
         var line = QuartileLine.Through(sorted);
         var envelope = QqEnvelopes.Simulate(n, options.Seed, options.Draws);
-        var (lower, upper) = envelope.Map(line);
+        var (mean, sd) = QqEnvelopes.MeanSd(sorted);
+        var (lower, upper) = envelope.Map(mean, sd);
         var series = new List<Series>
         {
             new BandSeries(SeriesRole.Envelope, xs, lower, upper),
@@ -75,7 +80,7 @@ public static class PooledPlot
         var lo = Math.Min(sorted[0], lower.Min());
         var hi = Math.Max(sorted[^1], upper.Max());
         var x = AxisScale.Linear("normal quantile", xs[0], xs[^1]);
-        var y = AxisScale.Linear(Studentized, lo, hi);
+        var y = AxisScale.Linear(Studentized, lo, hi, 6);
         return new Panel(x, y, series) { Title = "Normal QQ plot of the studentized residuals", Text = text, Mark = mark };
     }
 
@@ -95,7 +100,7 @@ public static class PooledPlot
         var series = new List<Series> { new StraightLine(SeriesRole.Guide, 0, 0) };
         series.AddRange(PointsWithHighlights(xs, finite, ys, rows, outliers));
         var x = AxisScale.Linear(PlotText.WithUnit("fitted " + report.Response, report.Unit), xs.Min(), xs.Max());
-        var y = AxisScale.Linear(Studentized, Math.Min(0, ys.Min()), Math.Max(0, ys.Max()));
+        var y = AxisScale.Linear(Studentized, Math.Min(0, ys.Min()), Math.Max(0, ys.Max()), 6);
         return new Panel(x, y, series) { Title = title, Text = text, Mark = mark };
     }
 
@@ -126,7 +131,7 @@ public static class PooledPlot
         var xs = placed.Select(i => (runOrder[i] - (scale.HasValue ? first : 0)) / (scale ?? 1)).ToArray();
         var ys = placed.Select(i => rows.Studentized[i]).ToArray();
         var x = AxisScale.Linear(label, xs[0], xs[^1]);
-        var y = AxisScale.Linear(Studentized, Math.Min(0, ys.Min()), Math.Max(0, ys.Max()));
+        var y = AxisScale.Linear(Studentized, Math.Min(0, ys.Min()), Math.Max(0, ys.Max()), 6);
         var series = new List<Series> { new StraightLine(SeriesRole.Guide, 0, 0) };
         if (Boundaries(design, rows, placed, xs) is { } rules)
         {
@@ -189,9 +194,9 @@ public static class PooledPlot
         return new RuleSeries(SeriesRole.Boundary, at, labels);
     }
 
-    private static Panel SpreadLevel(ResponseReport report, List<string> notes)
+    private static Panel SpreadLevel(DesignSummary design, ResponseReport report, List<string> notes)
     {
-        const string title = "Spread against level: cell SD against cell mean (log scales)";
+        const string title = "Spread against level (log scales)";
         var text = AssumptionLines(report.Verdict, AssumptionNames.EqualSpread);
         var usable = report.Cells.Where(c => c.N >= 2 && c.Sd > 0 && c.Mean > 0 && double.IsFinite(c.Sd)).ToArray();
         var replicated = report.Cells.Count(c => c.N >= 2);
@@ -213,13 +218,30 @@ public static class PooledPlot
         var y = AxisScale.Log10(PlotText.WithUnit("cell SD", report.Unit), usable.Min(c => c.Sd), usable.Max(c => c.Sd));
         var series = new List<Series>();
         var fit = LeastSquares(xs, ys);
-        if (fit is not null && usable.Length >= 3)
+        var ratio = usable.Max(c => c.Mean) / usable.Min(c => c.Mean);
+        if (fit is not null && usable.Length >= 3 && ratio >= MinLevelRatio)
         {
             series.Add(new StraightLine(SeriesRole.Fit, fit.Intercept, fit.Slope));
-            text.Insert(0, "fitted slope b = " + PlotText.Fixed(fit.Slope, 2) + " (b near 0: even spread; near 1: spread grows with the mean)");
+            text.Insert(0, "least-squares slope b = " + PlotText.Fixed(fit.Slope, 2));
+            notes.Add("Spread against level: a slope b near 0 means the spread does not follow the level; near 1, the SD grows in proportion "
+                + "to the mean, which a log scale would even out (a power transformation y^(1 − b) in general).");
+        }
+        else if (usable.Length >= 3)
+        {
+            text.Insert(0, "no slope: the largest cell mean is only " + PlotText.Fixed(100 * (ratio - 1), 0) + "% above the smallest");
         }
 
-        series.Add(new PointSeries(SeriesRole.Points, xs, ys));
+        // name the cells with the largest and the smallest SD
+        var named = new[] { report.Spread.LargestSdCell, report.Spread.SmallestSdCell }.OfType<int>().Select(c => report.Cells[c]).ToHashSet();
+        series.Add(new PointSeries(SeriesRole.Points, xs, ys)
+        {
+            Labels = named.Count == 0 ? null : usable.Select(c => named.Contains(c) ? string.Join(" / ", c.Levels) : null).ToArray(),
+        });
+        if (named.Count > 0)
+        {
+            notes.Add("The spread panel names the cells with the largest and the smallest SD by " + string.Join(" / ", design.Factors) + ".");
+        }
+
         return new Panel(x, y, series) { Title = title, Text = text, Mark = Mark(report.Verdict, AssumptionNames.EqualSpread) };
     }
 
@@ -272,10 +294,10 @@ public static class PooledPlot
             return [assumption + ": not testable (" + (a.Reason ?? "no check ran") + ")"];
         }
 
-        var line = assumption + ": " + PlotText.CheckName(a.Check) + " p = " + PlotText.P(a.P.Value);
+        var line = assumption + ": " + PlotText.PIs(PlotText.CheckName(a.Check) + " p", a.P.Value);
         if (a.PAdjusted is { } adjusted)
         {
-            line += ", Holm p = " + PlotText.P(adjusted);
+            line += ", " + PlotText.PIs("Holm p", adjusted);
         }
 
         return [line + (a.Status == CheckStatus.Flag ? ", flagged" : ", pass")];
@@ -290,11 +312,11 @@ public static class PooledPlot
 
         if (report.Model.Outliers.Count == 0)
         {
-            return "outlier screen: no row named (largest |t| = " + PlotText.Fixed(check.Statistic ?? double.NaN, 2) + ", Bonferroni p = " + PlotText.P(check.P ?? double.NaN) + ")";
+            return "outlier screen: no row named (largest |t| = " + PlotText.Fixed(check.Statistic ?? double.NaN, 2) + ", " + PlotText.PIs("Bonferroni p", check.P ?? double.NaN) + ")";
         }
 
         return "outlier screen: " + string.Join("; ", report.Model.Outliers.Select(o =>
-            "line " + NumberText.Count(o.Line) + " (t = " + PlotText.Fixed(o.Studentized, 2) + ", Bonferroni p = " + PlotText.P(o.PAdjusted) + ")"));
+            "line " + NumberText.Count(o.Line) + " (t = " + PlotText.Fixed(o.Studentized, 2) + ", " + PlotText.PIs("Bonferroni p", o.PAdjusted) + ")"));
     }
 
     private static PanelMark Mark(Verdict verdict, string assumption) =>
@@ -309,7 +331,7 @@ public static class PooledPlot
     private static List<LegendItem> Legend(Panel[] panels)
     {
         var all = panels.SelectMany(p => p.Series).ToList();
-        var items = new List<LegendItem> { new(LegendKey.Points, "residual (spread panel: one cell)") };
+        var items = new List<LegendItem> { new(LegendKey.Points, "residual; in the spread panel, one cell") };
         if (all.Any(s => s.Role == SeriesRole.Reference))
         {
             items.Add(new(LegendKey.Reference, "line through the quartiles"));

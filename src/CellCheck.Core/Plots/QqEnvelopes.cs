@@ -9,15 +9,17 @@ namespace CellCheck.Core.Plots;
 /// <remarks>
 /// Method: draw <c>m</c> samples of n standard normal values (Box-Muller on MathNet's xoshiro256** generator, seeded
 /// by the seed and n, so every cell of the same size gets the same envelope and the pictures are reproducible). Sort
-/// each sample and standardise it by its own quartile line, s_i = (z_(i) − a)/b, exactly as the data are; at each
-/// position i take the k-th smallest and the k-th largest of the m standardised values, k = round(0.025 (m + 1)).
-/// With the default m = 199, k = 5: a new standardised sample's i-th value falls between the 5th and the 195th of the
-/// 199 with probability 190/200 = 0.95 exactly (its rank among the 200 is uniform), so the band is a 95% pointwise
-/// envelope. Because every sample is standardised by its own quartile line, the band allows for the estimation of the
-/// line's location and scale; mapped through the data's quartile line it is drawn on the data scale. For residuals of
-/// a cell-means model the standardised residuals equal the standardised data, so the band is exact under normality;
-/// for residuals of other models (which are correlated) and for pooled studentized residuals it is an approximation.
-/// The band is pointwise: with many positions some points outside it are expected.
+/// each sample and standardise it by its own mean and standard deviation (n − 1 divisor), s_i = (z_(i) − z̄)/s_z,
+/// exactly as the plotted values are; at each position i take the k-th smallest and the k-th largest of the m
+/// standardised values, k = round(0.025 (m + 1)). With the default m = 199, k = 5: a new standardised sample's i-th
+/// value falls between the 5th and the 195th of the 199 with probability 190/200 = 0.95 exactly (its rank among the 200
+/// is uniform), so the band is a 95% pointwise envelope. Because every sample is standardised by its own mean and SD,
+/// the band allows for their estimation; mapped through the plotted values' mean and SD (value = mean + SD · s) it is
+/// drawn on the data scale. Mean and SD are used rather than the quartiles, because standardising by the quartile line
+/// pins the order statistics next to the quartiles and pinches the band there. For residuals of a cell-means model the
+/// standardised residuals equal the standardised data, so the band is exact under normality; for residuals of other
+/// models (which are correlated) and for pooled studentized residuals it is an approximation. The band is pointwise:
+/// with many positions some points outside it are expected.
 /// </remarks>
 public static class QqEnvelopes
 {
@@ -46,10 +48,10 @@ public static class QqEnvelopes
             }
 
             Array.Sort(sample);
-            var line = QuartileLine.Through(sample);
+            var (mean, sd) = MeanSd(sample);
             for (var i = 0; i < n; i++)
             {
-                byPosition[i][d] = (sample[i] - line.Intercept) / line.Slope;
+                byPosition[i][d] = (sample[i] - mean) / sd;
             }
         }
 
@@ -63,6 +65,25 @@ public static class QqEnvelopes
         }
 
         return new QqEnvelope(lower, upper, (draws + 1 - (2.0 * k)) / (draws + 1));
+    }
+
+    /// <summary>Mean and standard deviation (n − 1 divisor) of the values, by two passes.</summary>
+    public static (double Mean, double Sd) MeanSd(ReadOnlySpan<double> values)
+    {
+        var mean = 0.0;
+        foreach (var v in values)
+        {
+            mean += v;
+        }
+
+        mean /= values.Length;
+        var ss = 0.0;
+        foreach (var v in values)
+        {
+            ss += (v - mean) * (v - mean);
+        }
+
+        return (mean, values.Length > 1 ? Math.Sqrt(ss / (values.Length - 1)) : 0.0);
     }
 
     private static double Normal(Random random)

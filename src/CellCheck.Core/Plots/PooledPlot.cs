@@ -17,6 +17,8 @@ public static class PooledPlot
 
     private const string Studentized = "studentized residual";
 
+    private const string CellMeans = "cell-means";
+
     public static PlotModel Build(DesignSummary design, ResponseReport report, PlotOptions options)
     {
         ArgumentNullException.ThrowIfNull(design);
@@ -198,7 +200,9 @@ public static class PooledPlot
     {
         const string title = "Spread against level (log scales)";
         var text = AssumptionLines(report.Verdict, AssumptionNames.EqualSpread);
-        var usable = report.Cells.Where(c => c.N >= 2 && c.Sd > 0 && c.Mean > 0 && double.IsFinite(c.Sd)).ToArray();
+        var sds = ResidualSds(report);
+        var usable = Enumerable.Range(0, report.Cells.Count)
+            .Where(c => report.Cells[c].N >= 2 && sds[c] > 0 && double.IsFinite(sds[c]) && report.Cells[c].Mean > 0).ToArray();
         var replicated = report.Cells.Count(c => c.N >= 2);
         if (usable.Length < 2)
         {
@@ -212,13 +216,15 @@ public static class PooledPlot
             notes.Add(NumberText.Count(replicated - usable.Length) + " replicated cell(s) with a mean at or below zero or no spread are not in the spread panel.");
         }
 
-        var xs = usable.Select(c => Math.Log10(c.Mean)).ToArray();
-        var ys = usable.Select(c => Math.Log10(c.Sd)).ToArray();
-        var x = AxisScale.Log10(PlotText.WithUnit("cell mean", report.Unit), usable.Min(c => c.Mean), usable.Max(c => c.Mean));
-        var y = AxisScale.Log10(PlotText.WithUnit("cell SD", report.Unit), usable.Min(c => c.Sd), usable.Max(c => c.Sd));
+        var means = usable.Select(c => report.Cells[c].Mean).ToArray();
+        var spreads = usable.Select(c => sds[c]).ToArray();
+        var xs = means.Select(Math.Log10).ToArray();
+        var ys = spreads.Select(Math.Log10).ToArray();
+        var x = AxisScale.Log10(PlotText.WithUnit("cell mean", report.Unit), means.Min(), means.Max());
+        var y = AxisScale.Log10(PlotText.WithUnit("SD of the cell's residuals", report.Unit), spreads.Min(), spreads.Max());
         var series = new List<Series>();
         var fit = LeastSquares(xs, ys);
-        var ratio = usable.Max(c => c.Mean) / usable.Min(c => c.Mean);
+        var ratio = means.Max() / means.Min();
         if (fit is not null && usable.Length >= 3 && ratio >= MinLevelRatio)
         {
             series.Add(new StraightLine(SeriesRole.Fit, fit.Intercept, fit.Slope));
@@ -232,17 +238,33 @@ public static class PooledPlot
         }
 
         // name the cells with the largest and the smallest SD
-        var named = new[] { report.Spread.LargestSdCell, report.Spread.SmallestSdCell }.OfType<int>().Select(c => report.Cells[c]).ToHashSet();
+        var largest = Array.IndexOf(spreads, spreads.Max());
+        var smallest = Array.IndexOf(spreads, spreads.Min());
         series.Add(new PointSeries(SeriesRole.Points, xs, ys)
         {
-            Labels = named.Count == 0 ? null : usable.Select(c => named.Contains(c) ? string.Join(" / ", c.Levels) : null).ToArray(),
+            Labels = usable.Select((c, k) => k == largest || k == smallest ? string.Join(" / ", report.Cells[c].Levels) : null).ToArray(),
         });
-        if (named.Count > 0)
+        notes.Add("The spread panel names the cells with the largest and the smallest SD by " + string.Join(" / ", design.Factors) + "."
+            + (report.Model.Info.Name == CellMeans ? string.Empty : " Each SD is that of the cell's residuals from the model" + (design.Blocks.Count > 0 ? ", so block effects are taken out." : ".")));
+        return new Panel(x, y, series) { Title = title, Text = text, Mark = Mark(report.Verdict, AssumptionNames.EqualSpread) };
+    }
+
+    /// <summary>The SD (n − 1 divisor) of each cell's residuals; NaN for a single value. For the cell-means model this is the cell's SD.</summary>
+    public static double[] ResidualSds(ResponseReport report)
+    {
+        ArgumentNullException.ThrowIfNull(report);
+        var groups = new List<double>[report.Cells.Count];
+        for (var c = 0; c < groups.Length; c++)
         {
-            notes.Add("The spread panel names the cells with the largest and the smallest SD by " + string.Join(" / ", design.Factors) + ".");
+            groups[c] = [];
         }
 
-        return new Panel(x, y, series) { Title = title, Text = text, Mark = Mark(report.Verdict, AssumptionNames.EqualSpread) };
+        for (var i = 0; i < report.Rows.Cells.Length; i++)
+        {
+            groups[report.Rows.Cells[i]].Add(report.Rows.Residuals[i]);
+        }
+
+        return groups.Select(g => g.Count < 2 ? double.NaN : QqEnvelopes.MeanSd(g.ToArray()).Sd).ToArray();
     }
 
     /// <summary>Ordinary least squares of y on x, or null when x does not vary.</summary>

@@ -1,5 +1,7 @@
+using System.Globalization;
 using System.Security;
 using System.Text;
+using System.Text.RegularExpressions;
 using CellCheck.Core.Plots;
 using SkiaSharp;
 
@@ -10,7 +12,7 @@ namespace CellCheck.IO.Plots;
 /// recorded in the file) or SVG (vector, text as outlines of the embedded font, with the title and subtitle as the
 /// SVG's title and description). The same model gives byte-identical files.
 /// </summary>
-public static class PlotRenderer
+public static partial class PlotRenderer
 {
     /// <summary>Default PNG resolution.</summary>
     public const int DefaultDpi = 150;
@@ -73,8 +75,29 @@ public static class PlotRenderer
         }
 
         var text = Encoding.UTF8.GetString(buffer.ToArray());
-        output.Write(Encoding.UTF8.GetBytes(WithTitle(text, model)));
+        output.Write(Encoding.UTF8.GetBytes(WithTitle(Renumbered(text), model)));
     }
+
+    /// <summary>Skia numbers clip paths from a counter that lives as long as the process; renumber them in order of
+    /// appearance so the same picture always gives the same file.</summary>
+    private static string Renumbered(string svg)
+    {
+        var ids = new Dictionary<string, string>(StringComparer.Ordinal);
+        return IdPattern().Replace(svg, m =>
+        {
+            var old = m.Groups[2].Value;
+            if (!ids.TryGetValue(old, out var fresh))
+            {
+                fresh = "clip" + ids.Count.ToString(CultureInfo.InvariantCulture);
+                ids[old] = fresh;
+            }
+
+            return m.Groups[1].Value + fresh;
+        });
+    }
+
+    [GeneratedRegex(@"(id=""|url\(#)([A-Za-z]+_[0-9A-Za-z]+)")]
+    private static partial Regex IdPattern();
 
     /// <summary>Adds &lt;title&gt; and &lt;desc&gt; after the root element's start tag, so the outlined text stays findable.</summary>
     private static string WithTitle(string svg, PlotModel model)

@@ -232,9 +232,10 @@ public static class PooledPlot
             notes.Add("Spread against level: a slope b near 0 means the spread does not follow the level; near 1, the SD grows in proportion "
                 + "to the mean, which a log scale would even out (a power transformation y^(1 − b) in general).");
         }
-        else if (usable.Length >= 3)
+        else if (fit is not null && usable.Length >= 3)
         {
-            text.Insert(0, "no slope: the largest cell mean is only " + PlotText.Fixed(100 * (ratio - 1), 0) + "% above the smallest");
+            text.Insert(0, "slope b = " + PlotText.Fixed(fit.Slope, 2) + ", not drawn: the largest cell mean is only "
+                + PlotText.Fixed(100 * (ratio - 1), 0) + "% above the smallest, too little for a slope to mean much");
         }
 
         // name the cells with the largest and the smallest SD

@@ -202,9 +202,10 @@ internal sealed class PlotPainter(PlotLayout layout, bool textAsPaths)
     private void Points(SKCanvas canvas, SKRect plot, Axis x, Axis y, PointSeries points)
     {
         var highlight = points.Role == SeriesRole.Highlight;
-        var radius = highlight ? M.HighlightRadius : layout.Shared ? M.CellPointRadius : M.PooledPointRadius;
+        var radius = highlight ? M.HighlightRadius : PointRadius(points.X.Count);
         using var fill = Fill(highlight ? P.Alert : P.Points);
-        using var edge = Stroke(highlight ? P.Ink : P.Background, highlight ? 0.7f : 0.5f);
+        // a white rim separates a few overlapping points; with many it would wash the cloud out, so it goes
+        using var edge = Stroke(highlight ? P.Ink : P.Background, highlight ? 0.7f : points.X.Count > 100 ? 0f : 0.5f);
         for (var i = 0; i < points.X.Count; i++)
         {
             var px = MapX(plot, x, points.X[i]);
@@ -218,7 +219,10 @@ internal sealed class PlotPainter(PlotLayout layout, bool textAsPaths)
             else
             {
                 canvas.DrawCircle(px, py, radius, fill);
-                canvas.DrawCircle(px, py, radius, edge);
+                if (edge.StrokeWidth > 0)
+                {
+                    canvas.DrawCircle(px, py, radius, edge);
+                }
             }
         }
     }
@@ -230,6 +234,7 @@ internal sealed class PlotPainter(PlotLayout layout, bool textAsPaths)
             return;
         }
 
+        var placed = new List<SKRect>();
         for (var i = 0; i < points.X.Count && i < labels.Count; i++)
         {
             if (labels[i] is not { } label)
@@ -240,15 +245,34 @@ internal sealed class PlotPainter(PlotLayout layout, bool textAsPaths)
             var px = MapX(plot, x, points.X[i]);
             var py = MapY(plot, y, points.Y[i]);
             var w = _fonts.PointLabel.MeasureText(label);
-            var r = points.Role == SeriesRole.Highlight ? M.HighlightRadius : M.PooledPointRadius;
-            var right = px + r + 3 + w <= plot.Right - 2;
-            var tx = right ? px + r + 3 : px - r - 3 - w;
-            var ty = Math.Clamp(py + (_fonts.PointLabel.Size * 0.36f), plot.Top + _fonts.PointLabel.Size + 1, plot.Bottom - 2);
+            var h = _fonts.PointLabel.Size;
+            var r = (points.Role == SeriesRole.Highlight ? M.HighlightRadius : PointRadius(points.X.Count)) + 3;
+            // beside the point, right or left, then a line above or below, the first that stays inside and clear of earlier labels
+            (float Dx, float Dy)[] tries = [(r, 0), (-r - w, 0), (r, -h - 1), (-r - w, -h - 1), (r, h + 1), (-r - w, h + 1)];
+            SKRect? best = null;
+            foreach (var (dx, dy) in tries)
+            {
+                var baseline = py + (h * 0.36f) + dy;
+                var rect = new SKRect(px + dx - 1, baseline - h, px + dx + w + 1, baseline + 2);
+                var inside = rect.Left >= plot.Left + 1 && rect.Right <= plot.Right - 1 && rect.Top >= plot.Top + 1 && rect.Bottom <= plot.Bottom - 1;
+                if (inside && !placed.Any(p => p.IntersectsWith(rect)))
+                {
+                    best = rect;
+                    break;
+                }
+            }
+
+            var chosen = best ?? new SKRect(Math.Clamp(px + r - 1, plot.Left + 1, plot.Right - w - 3), Math.Clamp(py - (h * 0.64f), plot.Top + 1, plot.Bottom - h - 3), 0, 0);
+            chosen = new SKRect(chosen.Left, chosen.Top, chosen.Left + w + 2, chosen.Top + h + 2);
+            placed.Add(chosen);
             using var halo = Fill(P.Background.WithAlpha(220));
-            canvas.DrawRect(new SKRect(tx - 1, ty - _fonts.PointLabel.Size, tx + w + 1, ty + 2), halo);
-            Text(canvas, new PlacedText(label, tx, ty, _fonts.PointLabel, points.Role == SeriesRole.Highlight ? P.Alert : P.Ink, SKTextAlign.Left));
+            canvas.DrawRect(chosen, halo);
+            Text(canvas, new PlacedText(label, chosen.Left + 1, chosen.Top + h, _fonts.PointLabel, points.Role == SeriesRole.Highlight ? P.Alert : P.Ink, SKTextAlign.Left));
         }
     }
+
+    /// <summary>Point radius by how many points share a panel.</summary>
+    private float PointRadius(int count) => layout.Shared ? M.CellPointRadius : count > 200 ? 1.6f : count > 100 ? 1.85f : M.PooledPointRadius;
 
     private static void Frame(SKCanvas canvas, SKRect plot, PanelMark mark)
     {

@@ -276,7 +276,7 @@ public static class CellGridPlot
 
         if (panels.Any(p => p.Mark == PanelMark.NotTestable))
         {
-            items.Add(new(LegendKey.NotTestable, "cell too small to test"));
+            items.Add(new(LegendKey.NotTestable, "cell that could not be tested"));
         }
 
         return items;

@@ -30,7 +30,8 @@ public static class PooledPlot
         var notes = new List<string>();
         if (finite.Length < rows.Studentized.Length)
         {
-            notes.Add(NumberText.Count(rows.Studentized.Length - finite.Length) + " row(s) with leverage one have no studentized residual and are not shown.");
+            notes.Add(NumberText.Count(rows.Studentized.Length - finite.Length) + " row(s) have no studentized residual (leverage one, or no residual "
+                + "variation at all) and are not shown.");
         }
 
         Panel[] panels =
@@ -65,7 +66,7 @@ public static class PooledPlot
         var mark = Mark(report.Verdict, AssumptionNames.Normality);
         if (n < 3)
         {
-            return Message("Normal QQ plot of the studentized residuals", "fewer than 3 residuals: nothing to plot", text);
+            return Message("Normal QQ plot of the studentized residuals", "fewer than 3 studentized residuals: nothing to plot", text);
         }
 
         var xs = NormalScores.Blom(n);
@@ -94,7 +95,7 @@ public static class PooledPlot
         var mark = outlierCheck?.Status == CheckStatus.Flag ? PanelMark.Flagged : PanelMark.None;
         if (finite.Length == 0)
         {
-            return Message(title, "no residuals to plot", text);
+            return Message(title, "no studentized residuals to plot", text);
         }
 
         var xs = finite.Select(i => rows.Fitted[i]).ToArray();
@@ -124,7 +125,7 @@ public static class PooledPlot
 
         if (placed.Length == 0)
         {
-            return Message(title, "no row has a run position", text);
+            return Message(title, finite.Length == 0 ? "no studentized residuals to plot" : "no row has a run position", text);
         }
 
         var first = runOrder[placed[0]];

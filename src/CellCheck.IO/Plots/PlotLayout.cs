@@ -49,9 +49,9 @@ internal sealed class PlotLayout
         var rowTops = new float[grid.Rows + 1];
         var gridW = (grid.Columns * slotW) + ((grid.Columns - 1) * gapX);
 
-        RowStripWidth = grid.RowLabels.Count == 0 ? 0 : Math.Max(
+        RowStripWidth = grid.RowLabels.Count == 0 ? 0 : Max(
             grid.RowLabels.Select(l => fonts.Strip.MeasureText(l)).DefaultIfEmpty(0).Max(),
-            fonts.StripName.MeasureText(grid.RowTitle ?? string.Empty)) + 12f;
+            fonts.StripName.MeasureText(grid.RowTitle ?? string.Empty), 24f) + 12f;
         var yTickWidth = Shared ? grid.SharedY!.Ticks.Select(t => fonts.Tick.MeasureText(t.Label)).DefaultIfEmpty(0).Max() : 0;
         var leftArea = Shared ? axisLine + 6 + (RowStripWidth > 0 ? RowStripWidth + 6 : 0) + yTickWidth + M.TickLength + 3 : 0;
         var bottomArea = Shared ? M.TickLength + 2 + tickLine + 4 + axisLine : 0;
@@ -210,6 +210,8 @@ internal sealed class PlotLayout
     public List<SlotGeometry> Slots { get; } = [];
 
     public List<LegendPlacement> Legend { get; } = [];
+
+    private static float Max(float a, float b, float c) => Math.Max(a, Math.Max(b, c));
 
     private List<HeaderLine> HeaderLines(Panel panel, float width)
     {

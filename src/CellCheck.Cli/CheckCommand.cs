@@ -4,6 +4,7 @@ using CellCheck.Core.Remedies;
 using CellCheck.Core.Statistics;
 using CellCheck.IO;
 using CellCheck.IO.Design;
+using CellCheck.IO.Plots;
 using CellCheck.IO.Reports;
 
 namespace CellCheck.Cli;
@@ -16,7 +17,9 @@ internal static class CheckCommand
         var design = new Argument<string>("design") { Description = "The design file (YAML) naming the data file, factors and responses." };
         var json = new Option<string?>("--json") { Description = "Write the JSON report to FILE.", HelpName = "FILE" };
         var html = new Option<string?>("--html") { Description = "Write the self-contained HTML report to FILE.", HelpName = "FILE" };
-        var outDir = new Option<string?>("--out") { Description = "Write every report (report.json, report.html, diagnostics.csv) into folder DIR, creating it if needed.", HelpName = "DIR" };
+        var outDir = new Option<string?>("--out") { Description = "Write every report (report.json, report.html, diagnostics.csv, pictures) into folder DIR, creating it if needed.", HelpName = "DIR" };
+        var dpi = new Option<int?>("--dpi") { Description = "Resolution of the PNG pictures written with --out (default 150).", HelpName = "N" };
+        var noPictures = new Option<bool>("--no-pictures") { Description = "With --out, write no pictures (PNG and SVG)." };
         var adjust = new Option<string?>("--adjust") { Description = "Adjustment of within-cell p-values across cells: holm (default), bh or none.", HelpName = "METHOD" };
         adjust.AcceptOnlyFromAmong("holm", "bh", "none");
         var alpha = new Option<double?>("--alpha") { Description = "Significance level (overrides the design file; default 0.05).", HelpName = "A" };
@@ -26,7 +29,7 @@ internal static class CheckCommand
         var sensitivityDraws = new Option<int?>("--sensitivity-draws") { Description = "Simulated data sets per scenario for the checks' sensitivity table (default 400).", HelpName = "N" };
         var command = new Command("check", "Check the assumptions of an ANOVA for every response of a design.\n" + ExitCodes.HelpText)
         {
-            design, json, html, outDir, adjust, alpha, quiet, transform, shift, sensitivityDraws,
+            design, json, html, outDir, dpi, noPictures, adjust, alpha, quiet, transform, shift, sensitivityDraws,
         };
         command.Options.Add(new VersionOption());
         command.SetAction(parse =>
@@ -35,6 +38,13 @@ internal static class CheckCommand
             if (a is { } value && (value <= 0 || value > 0.5))
             {
                 error.WriteLine("error [usage] --alpha must be above 0 and at most 0.5.");
+                return ExitCodes.BadInput;
+            }
+
+            var resolution = parse.GetValue(dpi) ?? PlotRenderer.DefaultDpi;
+            if (resolution < PlotRenderer.MinDpi || resolution > PlotRenderer.MaxDpi)
+            {
+                error.WriteLine($"error [usage] --dpi must be between {PlotRenderer.MinDpi} and {PlotRenderer.MaxDpi}.");
                 return ExitCodes.BadInput;
             }
 
@@ -71,7 +81,8 @@ internal static class CheckCommand
                 TerminalReportWriter.Write(report, output, ToolVersion.Text);
             }
 
-            var written = ReportOutputs.Write(run.Value, parse.GetValue(json), parse.GetValue(outDir), output, error, parse.GetValue(html));
+            var pictures = parse.GetValue(noPictures) ? (int?)null : resolution;
+            var written = ReportOutputs.Write(run.Value, parse.GetValue(json), parse.GetValue(outDir), pictures, output, error, parse.GetValue(html));
             if (written != 0)
             {
                 return written;

@@ -1,5 +1,6 @@
 using CellCheck.IO;
 using CellCheck.IO.Html;
+using CellCheck.IO.Plots;
 using CellCheck.IO.Reports;
 
 namespace CellCheck.Cli;
@@ -7,7 +8,8 @@ namespace CellCheck.Cli;
 /// <summary>Writes the report files a user asked for, atomically, never over an input.</summary>
 internal static class ReportOutputs
 {
-    public static int Write(CheckRunResult run, string? json, string? outDir, TextWriter output, TextWriter error, string? html = null)
+    /// <param name="pictureDpi">With <paramref name="outDir"/>, the PNG resolution of the pictures; null writes none.</param>
+    public static int Write(CheckRunResult run, string? json, string? outDir, int? pictureDpi, TextWriter output, TextWriter error, string? html = null)
     {
         var targets = new List<string>();
         if (json is not null)
@@ -46,7 +48,10 @@ internal static class ReportOutputs
 
         if (pages.Count > 0)
         {
-            var context = new HtmlContext(FileDigest.Sha256(run.Design.DataPath), DateTimeOffset.UtcNow, ToolVersion.Text);
+            var context = new HtmlContext(FileDigest.Sha256(run.Design.DataPath), DateTimeOffset.UtcNow, ToolVersion.Text)
+            {
+                Pictures = HtmlPictures.For(run.Report),
+            };
             var page = System.Text.Encoding.UTF8.GetBytes(HtmlReportWriter.Render(run.Report, context));
             foreach (var target in pages)
             {
@@ -69,6 +74,20 @@ internal static class ReportOutputs
             }
 
             output.WriteLine("Wrote " + target);
+        }
+
+        if (outDir is not null && pictureDpi is { } dpi)
+        {
+            var (pictures, problem) = PictureFiles.Write(run.Report, outDir, inputs, dpi);
+            foreach (var path in pictures)
+            {
+                output.WriteLine("Wrote " + path);
+            }
+
+            if (problem is not null)
+            {
+                return ProblemPrinter.Print([problem], error);
+            }
         }
 
         return 0;

@@ -47,6 +47,41 @@ public sealed class CheckCommandTests
     }
 
     [Fact]
+    public void Out_writes_the_pictures_at_the_chosen_resolution_unless_told_not_to()
+    {
+        var folder = Path.Combine(Path.GetTempPath(), "cellcheck-cli-" + Guid.NewGuid().ToString("N"));
+        try
+        {
+            var (code, _, err) = CliRunner.Run("check", CliRunner.Design("oven-drift.yaml"), "--out", folder, "--dpi", "72", "--quiet");
+            Assert.Equal((1, string.Empty), (code, err));
+            var names = Directory.GetFiles(folder).Select(f => Path.GetFileName(f)).Order(StringComparer.Ordinal).ToArray();
+            Assert.Equal(["diagnostics.csv", "hardness-cells.png", "hardness-cells.svg", "hardness-pooled.png", "hardness-pooled.svg", "report.html", "report.json"], names);
+            var at72 = new FileInfo(Path.Combine(folder, "hardness-pooled.png")).Length;
+
+            CliRunner.Run("check", CliRunner.Design("oven-drift.yaml"), "--out", folder, "--quiet");
+            Assert.True(new FileInfo(Path.Combine(folder, "hardness-pooled.png")).Length > at72, "150 dpi is the default and larger than 72 dpi");
+
+            var bare = Path.Combine(folder, "bare");
+            CliRunner.Run("check", CliRunner.Design("oven-drift.yaml"), "--out", bare, "--no-pictures", "--quiet");
+            Assert.Equal(["diagnostics.csv", "report.html", "report.json"], Directory.GetFiles(bare).Select(f => Path.GetFileName(f)).Order(StringComparer.Ordinal).ToArray());
+        }
+        finally
+        {
+            Directory.Delete(folder, recursive: true);
+        }
+    }
+
+    [Theory]
+    [InlineData("10")]
+    [InlineData("601")]
+    public void A_resolution_out_of_range_is_a_usage_error(string dpi)
+    {
+        var (code, _, err) = CliRunner.Run("check", CliRunner.Design("oven-drift.yaml"), "--dpi", dpi);
+        Assert.Equal(2, code);
+        Assert.Contains("--dpi", err, StringComparison.Ordinal);
+    }
+
+    [Fact]
     public void A_drift_in_run_order_is_flagged_and_the_same_data_in_shuffled_order_are_not()
     {
         var (drift, driftOut, _) = CliRunner.Run("check", CliRunner.Design("oven-drift.yaml"));

@@ -21,11 +21,19 @@ public sealed partial class HtmlReportTests : IDisposable
     [GeneratedRegex(@"<dt>Generated</dt><dd>[^<]*</dd>|<dt>Tool</dt><dd>[^<]*</dd>")]
     private static partial Regex Volatile();
 
+    /// <summary>Pictures are tested as plot models and renders elsewhere; the golden page keeps only their place.</summary>
+    [GeneratedRegex(@"<svg[\s\S]*?</svg>")]
+    private static partial Regex Picture();
+
+    [GeneratedRegex(@"<svg width=""([0-9.]+)"" height=""([0-9.]+)""")]
+    private static partial Regex SvgSize();
+
     [Fact]
     public void The_page_of_the_field_trial_matches_its_golden_file_apart_from_date_and_version()
     {
         var text = File.ReadAllText(Page(CliRunner.Design("field-trial.yaml")));
-        GoldenFile.Match("field-trial.html", CliRunner.Portable(Volatile().Replace(text, "<!-- volatile -->")));
+        Assert.Equal(2, Picture().Count(text));
+        GoldenFile.Match("field-trial.html", CliRunner.Portable(Picture().Replace(Volatile().Replace(text, "<!-- volatile -->"), "<svg><!-- picture --></svg>")));
     }
 
     [Fact]
@@ -65,6 +73,12 @@ public sealed partial class HtmlReportTests : IDisposable
     public void The_page_loads_without_console_errors_prints_to_pdf_pages_and_can_be_looked_at()
     {
         var page = Page(CliRunner.Design("coating-cure.yaml"));
+        Assert.Equal(4, Picture().Count(File.ReadAllText(page)));
+        var (_, dom, _) = Chromium.Run(Path.Combine(_folder, "profile-svg"), "--dump-dom", "file://" + page);
+        var sizes = SvgSize().Matches(dom);
+        Assert.Equal(4, sizes.Count);
+        Assert.All(sizes, m => Assert.True(double.Parse(m.Groups[1].Value, System.Globalization.CultureInfo.InvariantCulture) > 0
+            && double.Parse(m.Groups[2].Value, System.Globalization.CultureInfo.InvariantCulture) > 0, "a picture has no size"));
         var shot = Path.Combine(AppContext.BaseDirectory, "coating-cure-page.png");
         var (_, _, err) = Chromium.Run(Path.Combine(_folder, "profile-shot"), "--window-size=1200,2000", "--screenshot=" + shot, "file://" + page);
         Assert.True(new FileInfo(shot).Length > 10_000, "screenshot is empty");

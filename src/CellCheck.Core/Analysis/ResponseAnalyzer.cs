@@ -41,6 +41,7 @@ public static class ResponseAnalyzer
             {
                 RunOrder = data.RunOrder is { } ro ? partition.RowOrder.Select(r => ro[r]).ToArray() : null,
                 BlockCodes = data.Blocks.Select(b => partition.RowOrder.Select(r => b.Codes[r]).ToArray()).ToArray(),
+                BlockLevels = data.Blocks.Select(b => b.Levels).ToArray(),
             },
         };
     }

@@ -17,4 +17,7 @@ public sealed record RowDiagnostics(
 
     /// <summary>Block level index of each row per block factor (empty without blocks).</summary>
     public IReadOnlyList<int[]> BlockCodes { get; init; } = [];
+
+    /// <summary>Level labels of each block factor, indexed by the codes in <see cref="BlockCodes"/> (empty without blocks).</summary>
+    public IReadOnlyList<IReadOnlyList<string>> BlockLevels { get; init; } = [];
 }

@@ -16,6 +16,10 @@ public sealed record OrderResult(
     IReadOnlyList<BlockOrderResult> ByBlock,
     IReadOnlyList<string> Notes)
 {
+    /// <summary>Durbin-Watson p against autocorrelation of either sign: 2·min(p, 1 − p) of the one-sided p (the
+    /// distribution of d is continuous).</summary>
+    public double? DurbinWatsonTwoSided => Checks.FirstOrDefault(c => c.Check == CheckNames.DurbinWatson)?.P is { } p ? Math.Min(1, 2 * Math.Min(p, 1 - p)) : null;
+
     public static OrderResult NotDeclared { get; } = new(null, 0, [], null, null, null, [],
         ["No run order was declared, so independence was not checked. Add run_order: COLUMN (or run_order: file when the rows are in run order)."]);
 }

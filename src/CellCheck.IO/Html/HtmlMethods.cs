@@ -22,6 +22,30 @@ internal static class HtmlMethods
         ("Lenth", "pseudo standard error of effects of an unreplicated two-level factorial (Lenth 1989)."),
     ];
 
+    private static readonly string[] References =
+    [
+        "Anderson, T. W. & Darling, D. A. (1954). A test of goodness of fit. Journal of the American Statistical Association 49, 765-769.",
+        "Anscombe, F. J. & Glynn, W. J. (1983). Distribution of the kurtosis statistic b2 for normal samples. Biometrika 70, 227-234.",
+        "Bartlett, M. S. (1937). Properties of sufficiency and statistical tests. Proceedings of the Royal Society A 160, 268-282.",
+        "Box, G. E. P. & Cox, D. R. (1964). An analysis of transformations. Journal of the Royal Statistical Society B 26, 211-252.",
+        "Brown, M. B. & Forsythe, A. B. (1974). Robust tests for the equality of variances. Journal of the American Statistical Association 69, 364-367.",
+        "Conover, W. J., Johnson, M. E. & Johnson, M. M. (1981). A comparative study of tests for homogeneity of variances. Technometrics 23, 351-361.",
+        "D'Agostino, R. B. (1970). Transformation to normality of the null distribution of g1. Biometrika 57, 679-681.",
+        "D'Agostino, R. B. & Stephens, M. A. (1986). Goodness-of-Fit Techniques. Marcel Dekker.",
+        "Durbin, J. & Watson, G. S. (1950, 1951). Testing for serial correlation in least squares regression I, II. Biometrika 37, 409-428; 38, 159-178.",
+        "Hines, W. G. S. & O'Hara Hines, R. J. (2000). Increased power with modified forms of the Levene (Med) test. Biometrics 56, 451-454.",
+        "Holm, S. (1979). A simple sequentially rejective multiple test procedure. Scandinavian Journal of Statistics 6, 65-70.",
+        "Imhof, J. P. (1961). Computing the distribution of quadratic forms in normal variables. Biometrika 48, 419-426.",
+        "Lenth, R. V. (1989). Quick and easy analysis of unreplicated factorials. Technometrics 31, 469-473.",
+        "Levene, H. (1960). Robust tests for equality of variances. In Contributions to Probability and Statistics, Stanford University Press, 278-292.",
+        "Royston, P. (1992). Approximating the Shapiro-Wilk W-test for non-normality. Statistics and Computing 2, 117-119.",
+        "Royston, P. (1995). Remark AS R94: A remark on algorithm AS 181, the W-test for normality. Applied Statistics 44, 547-551.",
+        "Shapiro, S. S. & Wilk, M. B. (1965). An analysis of variance test for normality (complete samples). Biometrika 52, 591-611.",
+        "Tukey, J. W. (1949). One degree of freedom for non-additivity. Biometrics 5, 232-242.",
+        "Wald, A. & Wolfowitz, J. (1940). On a test whether two samples are from the same population. Annals of Mathematical Statistics 11, 147-162.",
+        "Yeo, I.-K. & Johnson, R. A. (2000). A new family of power transformations to improve normality or symmetry. Biometrika 87, 954-959.",
+    ];
+
     public static void Write(StringBuilder sb)
     {
         sb.Append("<section><h2>Methods</h2><table><thead><tr><th>method</th><th>how it is computed</th></tr></thead><tbody>\n");
@@ -30,6 +54,12 @@ internal static class HtmlMethods
             sb.Append("<tr><td>").Append(Html.Text(method)).Append("</td><td>").Append(Html.Text(how)).Append("</td></tr>\n");
         }
 
-        sb.Append("</tbody></table></section>\n");
+        sb.Append("</tbody></table>\n<h3>References</h3><ol class=\"refs\">");
+        foreach (var reference in References)
+        {
+            sb.Append("<li>").Append(Html.Text(reference)).Append("</li>");
+        }
+
+        sb.Append("</ol></section>\n");
     }
 }

@@ -21,6 +21,7 @@ internal static class OrderJson
         w.WriteNumber("rows", o.Rows);
         JsonReportWriter.Number(w, "lag1_autocorrelation", o.Lag1);
         JsonReportWriter.Number(w, "expected_d", o.ExpectedD);
+        JsonReportWriter.Number(w, "durbin_watson_p_two_sided", o.DurbinWatsonTwoSided);
         if (o.Method is null)
         {
             w.WriteNull("durbin_watson_method");

@@ -53,9 +53,13 @@ internal sealed class CsvRows : ITableRows
 
             if (row.ColCount != Header.Count)
             {
-                Fault ??= new Problem(ProblemCodes.RaggedRow, _path, Line, null,
-                    $"Line {Text(Line)} has {Text(row.ColCount)} field(s) but the header has {Text(Header.Count)}.",
-                    "Check for a missing or extra separator on this line, or a quote that is not closed.");
+                Fault ??= NextLine - Line > 1
+                    ? new Problem(ProblemCodes.UnclosedQuote, _path, Line, null,
+                        $"The row that starts on line {Text(Line)} runs over lines {Text(Line)} to {Text(NextLine - 1)} and has {Text(row.ColCount)} field(s) where the header has {Text(Header.Count)}: a quote on line {Text(Line)} is probably not closed.",
+                        "Close the quote on that line (a quote inside a quoted field is written twice: \"\").")
+                    : new Problem(ProblemCodes.RaggedRow, _path, Line, null,
+                        $"Line {Text(Line)} has {Text(row.ColCount)} field(s) but the header has {Text(Header.Count)}.",
+                        "Check for a missing or extra separator on this line, or a quote that is not closed.");
                 return false;
             }
 

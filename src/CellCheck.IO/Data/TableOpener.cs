@@ -102,6 +102,12 @@ internal static class TableOpener
 
     private static Problem? HeaderProblem(ITableRows table, string path)
     {
+        if (table.Header.Count == 1 && string.IsNullOrWhiteSpace(table.Header[0]))
+        {
+            return new Problem(ProblemCodes.EmptyHeader, path, table is CsvRows ? 1 : table.Line, null, "The header line is blank: the first line must name the columns.",
+                "Remove blank lines above the header, so that the first line names the columns.");
+        }
+
         for (var i = 0; i < table.Header.Count; i++)
         {
             if (string.IsNullOrWhiteSpace(table.Header[i]) && i < table.Header.Count - 1)

@@ -101,10 +101,10 @@ public static class DesignReader
                 duplicate ? "A key is written twice." : "The YAML cannot be read: " + FirstLine(ex.Message),
                 duplicate ? "Keep one of the two entries." : "Check indentation (spaces, not tabs), colons and brackets near this place."));
         }
-        catch (InvalidOperationException)
+        catch (Exception ex) when (ex is InvalidOperationException or ArgumentException)
         {
-            // The YAML scanner can fail without a YamlException on some broken flow collections; locate the
-            // failure at the end of the last event it did parse.
+            // The YAML scanner and tree loader can fail without a YamlException on some broken flow collections and
+            // on keys of an unexpected kind; locate the failure at the end of the last event parsed.
             var mark = LastParsedMark(text);
             return LoadResult<DesignFile>.Failure(new Problem(ProblemCodes.YamlSyntax, path, mark.Line, mark.Column,
                 "The YAML cannot be read after this place.", "Check for an unclosed bracket or quote, and indentation (spaces, not tabs)."));

@@ -149,9 +149,10 @@ public static class DesignReader
                 mark = new SourceMark((int)parser.Current!.End.Line, (int)parser.Current.End.Column);
             }
         }
-        catch (Exception ex) when (ex is YamlException or InvalidOperationException)
+        catch (Exception ex) when (ex is YamlException or InvalidOperationException or ArgumentException)
         {
-            // The mark of the last event parsed is the best location there is.
+            // The mark of the last event parsed is the best location there is (the parser throws
+            // ArgumentException for a tag that is not a valid URI, for example).
         }
 
         return mark;

@@ -25,6 +25,7 @@ internal sealed class FuzzTargets : IDisposable
     private const string DesignData = "a,b,y,z,run\n1,x,1.5,2,1\n1,x,1.7,2.5,2\n2,y,2.5,3,3\n2,y,2.9,3.1,4\n1,y,1.1,0.4,5\n2,x,3.3,1,6\n";
 
     private readonly string _folder;
+    private readonly Dictionary<string, DesignFile> _designs = new(StringComparer.Ordinal);
 
     public FuzzTargets()
     {
@@ -37,6 +38,15 @@ internal sealed class FuzzTargets : IDisposable
         }
 
         File.WriteAllText(Path.Combine(_folder, "fixed.csv"), DesignData);
+        foreach (var kind in new[] { "csv", "xlsx" })
+        {
+            for (var i = 0; i < Designs.Length; i++)
+            {
+                var design = DesignReader.Read(DesignPath(i, kind));
+                _designs[DesignPath(i, kind)] = design.Ok ? design.Value!
+                    : throw new InvalidOperationException("The harness's own design file is refused: " + design.Problems[0].What);
+            }
+        }
     }
 
     public string Run(string target, byte[] input) => target switch
@@ -59,13 +69,7 @@ internal sealed class FuzzTargets : IDisposable
         var signature = new List<string>();
         for (var i = 0; i < Designs.Length; i++)
         {
-            var design = DesignReader.Read(DesignPath(i, kind));
-            if (!design.Ok)
-            {
-                throw new InvalidOperationException("The harness's own design file is refused: " + design.Problems[0].What);
-            }
-
-            var data = DataReader.Read(design.Value!);
+            var data = DataReader.Read(_designs[DesignPath(i, kind)]);
             signature.Add(Signature(data.Problems));
             if (analyze && data.Ok)
             {

@@ -145,9 +145,11 @@ internal static class TableOpener
             && index >= 1 && index <= names.Length ? names[index - 1] : null;
     }
 
+    /// <summary>The first line of a library's message, at most 200 characters (it may quote a whole hostile header).</summary>
     internal static string FirstLine(string message)
     {
         var cut = message.IndexOf('\n', StringComparison.Ordinal);
-        return (cut < 0 ? message : message[..cut]).Trim();
+        var line = (cut < 0 ? message : message[..cut]).Trim();
+        return line.Length <= 200 ? line : line[..197] + "...";
     }
 }

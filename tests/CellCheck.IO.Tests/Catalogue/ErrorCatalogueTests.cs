@@ -48,6 +48,22 @@ public sealed partial class ErrorCatalogueTests
         Assert.All(Codes, c => Assert.Matches("^(design|data|output)\\.[a-z]+(-[a-z]+)*$", c));
     }
 
+    [Theory]
+    [InlineData("missing")]
+    [InlineData("not-a-number")]
+    [InlineData("not-finite")]
+    [InlineData("out-of-range")]
+    [InlineData("missing-factor")]
+    [InlineData("thousands-separator")]
+    public void Every_exclusion_code_the_reader_gives_is_documented(string code)
+    {
+        var readme = Readme();
+        var start = readme.IndexOf("Excluded rows carry their own codes", StringComparison.Ordinal);
+        Assert.True(start >= 0);
+        var paragraph = readme[start..readme.IndexOf("\n\n", start, StringComparison.Ordinal)];
+        Assert.Contains($"`{code}`", paragraph, StringComparison.Ordinal);
+    }
+
     [GeneratedRegex(@"^\| `(?<code>(design|data|output)\.[a-z-]+)` \|.*\|\s*$", RegexOptions.Multiline)]
     private static partial Regex CatalogueRows();
 }

@@ -38,15 +38,6 @@ internal sealed class FuzzTargets : IDisposable
         }
 
         File.WriteAllText(Path.Combine(_folder, "fixed.csv"), DesignData);
-        foreach (var kind in new[] { "csv", "xlsx" })
-        {
-            for (var i = 0; i < Designs.Length; i++)
-            {
-                var design = DesignReader.Read(DesignPath(i, kind));
-                _designs[DesignPath(i, kind)] = design.Ok ? design.Value!
-                    : throw new InvalidOperationException("The harness's own design file is refused: " + design.Problems[0].What);
-            }
-        }
     }
 
     public string Run(string target, byte[] input) => target switch
@@ -69,7 +60,7 @@ internal sealed class FuzzTargets : IDisposable
         var signature = new List<string>();
         for (var i = 0; i < Designs.Length; i++)
         {
-            var data = DataReader.Read(_designs[DesignPath(i, kind)]);
+            var data = DataReader.Read(Design(DesignPath(i, kind)));
             signature.Add(Signature(data.Problems));
             if (analyze && data.Ok)
             {
@@ -81,6 +72,20 @@ internal sealed class FuzzTargets : IDisposable
         }
 
         return string.Join('|', signature);
+    }
+
+    /// <summary>The harness's own design, read once, on first use: under SharpFuzz no instrumented code may run
+    /// before the fuzzing loop starts (its coverage map does not exist yet).</summary>
+    private DesignFile Design(string path)
+    {
+        if (!_designs.TryGetValue(path, out var design))
+        {
+            var read = DesignReader.Read(path);
+            design = read.Ok ? read.Value! : throw new InvalidOperationException("The harness's own design file is refused: " + read.Problems[0].What);
+            _designs[path] = design;
+        }
+
+        return design;
     }
 
     private string Design(byte[] input)

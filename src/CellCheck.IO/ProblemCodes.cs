@@ -28,6 +28,11 @@ public static class ProblemCodes
     public const string BadModel = "design.bad-model";
     public const string UnknownTerm = "design.unknown-term";
     public const string DuplicateTerm = "design.duplicate-term";
+    public const string DesignEncoding = "design.encoding";
+    public const string DesignNotText = "design.not-text";
+    public const string AliasLimit = "design.alias-limit";
+    public const string TooDeep = "design.too-deep";
+    public const string MultipleDocuments = "design.multiple-documents";
 
     public const string DataNotFound = "data.not-found";
     public const string DataUnreadable = "data.unreadable";
@@ -43,6 +48,10 @@ public static class ProblemCodes
     public const string SheetNotFound = "data.sheet-not-found";
     public const string EmptyHeader = "data.empty-header";
     public const string NoRowsLeft = "data.no-rows-left";
+    public const string DataEncoding = "data.encoding";
+    public const string DataNotText = "data.not-text";
+    public const string LineTooLong = "data.line-too-long";
+    public const string UnclosedQuote = "data.unclosed-quote";
 
     public const string PlanMissingEffect = "plan.missing-effect";
     public const string PlanBadEffect = "plan.bad-effect";

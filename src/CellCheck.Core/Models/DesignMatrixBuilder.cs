@@ -54,7 +54,7 @@ public static class DesignMatrixBuilder
         if (factor.LevelValues is { } levelValues && !forceCategorical)
         {
             var raw = rows.Select(r => levelValues[factor.Codes[r]]).ToArray();
-            var mean = raw.Average();
+            var mean = raw.Length == 0 ? 0 : raw.Average();
             return [(factor.Name, raw.Select(v => v - mean).ToArray())];
         }
 

@@ -17,6 +17,13 @@ public sealed class ModelResiduals(IReadOnlyList<FactorColumn> blocks, ModelSpec
     public ResidualSet Compute(CellPartition partition)
     {
         ArgumentNullException.ThrowIfNull(partition);
+        if (partition.RowOrder.Length == 0)
+        {
+            // No usable value of this response (all missing or excluded): there is nothing to fit, and the cell-means
+            // residuals of no rows make every check not-testable.
+            return new CellMeansResiduals().Compute(partition);
+        }
+
         var design = DesignMatrixBuilder.Build(partition.Factors, blocks, spec, partition.RowOrder);
         var y = partition.Values.Values;
         var kept = OrderedRank.KeptColumns(design.X);

@@ -9,6 +9,9 @@ namespace CellCheck.Core.Resolution;
 /// </summary>
 public static class RecordingStep
 {
+    /// <summary>2^53: the largest count of units below which every integer is exact in a double.</summary>
+    private const double MaxExactUnits = 9007199254740992.0;
+
     public static ResolutionSummary Summarize(GroupedValues cells, int? decimals, double residualSd)
     {
         ArgumentNullException.ThrowIfNull(cells);
@@ -18,13 +21,21 @@ public static class RecordingStep
             var unit = Math.Pow(10, -d);
             long divisor = 0;
             var first = Math.Round(cells.Values[0] / unit);
+            var exact = true;
             foreach (var v in cells.Values)
             {
-                var units = (long)Math.Round(v / unit - first);
-                divisor = Gcd(divisor, Math.Abs(units));
+                var scaled = Math.Round(v / unit - first);
+                if (!(Math.Abs(scaled) < MaxExactUnits))
+                {
+                    // Beyond 2^53 units a double no longer holds every integer: the step cannot be read from the values.
+                    exact = false;
+                    break;
+                }
+
+                divisor = Gcd(divisor, Math.Abs((long)scaled));
             }
 
-            step = divisor > 0 ? divisor * unit : null;
+            step = exact && divisor > 0 ? divisor * unit : null;
         }
 
         var tied = 0;

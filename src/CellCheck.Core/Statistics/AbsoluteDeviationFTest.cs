@@ -15,7 +15,7 @@ internal static class AbsoluteDeviationFTest
     public static TestOutcome Test(GroupedValues groups, SpreadCentre centre)
     {
         ArgumentNullException.ThrowIfNull(groups);
-        var part = GroupFilter.AtLeast(groups, 2);
+        var part = GroupFilter.AtLeast(SampleGuard.Scaled(groups), 2);
         if (GroupFilter.DeviationTestObstacle(part) is { } obstacle)
         {
             return TestOutcome.NotTestable(obstacle);
@@ -23,16 +23,26 @@ internal static class AbsoluteDeviationFTest
 
         var deviations = new double[part.Count];
         var scratch = new double[GroupFilter.LargestSize(part)];
+        var shifted = new double[GroupFilter.LargestSize(part)];
         var roundingFloor = 0.0;
         for (var g = 0; g < part.GroupCount; g++)
         {
+            // Centre about the group's first value before taking the mean or median: y − y₀ is exact for values
+            // with many constant leading digits, so the centre is not rounded at the data's magnitude.
             var y = part.Group(g);
-            var c = centre == SpreadCentre.Mean ? Descriptive.Mean(y) : Descriptive.Median(y, scratch);
+            var origin = y[0];
+            var d = shifted.AsSpan(0, y.Length);
+            for (var i = 0; i < y.Length; i++)
+            {
+                d[i] = y[i] - origin;
+            }
+
+            var c = centre == SpreadCentre.Mean ? Descriptive.Mean(d) : Descriptive.Median(d, scratch);
             var offset = part.Starts[g];
             for (var i = 0; i < y.Length; i++)
             {
-                deviations[offset + i] = Math.Abs(y[i] - c);
-                var noise = RoundingAllowance * UnitRoundoff * (Math.Abs(y[i]) + Math.Abs(c));
+                deviations[offset + i] = Math.Abs(d[i] - c);
+                var noise = RoundingAllowance * UnitRoundoff * (Math.Abs(y[i]) + Math.Abs(origin + c));
                 roundingFloor += noise * noise;
             }
         }

@@ -46,6 +46,16 @@ public static class AndersonDarling
                 return TestOutcome.NotTestable(NotTestableReason.ZeroSpread);
             }
 
+            // Rescale extreme magnitudes (exact, by a power of two), then centre about the middle order statistic:
+            // x − x₍ₘ₎ is exact for values with many constant leading digits, so the standardised values are not
+            // rounded at the data's magnitude. Both keep the order and leave A² unchanged.
+            var scale = SampleGuard.ScaleFor(sorted);
+            var origin = sorted[sorted.Length / 2] * scale;
+            for (var i = 0; i < sorted.Length; i++)
+            {
+                sorted[i] = (sorted[i] * scale) - origin;
+            }
+
             var a2 = Statistic(sorted);
             return new TestOutcome(a2, PValue(ModifiedStatistic(a2, sorted.Length)));
         }

@@ -22,6 +22,7 @@ public static class Bartlett
     public static TestOutcome Test(GroupedValues groups)
     {
         ArgumentNullException.ThrowIfNull(groups);
+        groups = SampleGuard.Scaled(groups);
         if (GroupFilter.CountAtLeast(groups, 2) < 2)
         {
             return TestOutcome.NotTestable(NotTestableReason.TooFewGroups);

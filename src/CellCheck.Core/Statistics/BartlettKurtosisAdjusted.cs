@@ -16,6 +16,7 @@ public static class BartlettKurtosisAdjusted
     public static TestOutcome Test(GroupedValues groups)
     {
         ArgumentNullException.ThrowIfNull(groups);
+        groups = SampleGuard.Scaled(groups);
         var bartlett = Bartlett.Test(groups);
         if (!bartlett.IsTestable)
         {

@@ -19,7 +19,7 @@ public static class BrownForsytheZerosRemoved
     public static TestOutcome Test(GroupedValues groups)
     {
         ArgumentNullException.ThrowIfNull(groups);
-        var part = GroupFilter.AtLeast(groups, 2);
+        var part = GroupFilter.AtLeast(SampleGuard.Scaled(groups), 2);
         if (GroupFilter.DeviationTestObstacle(part) is { } obstacle)
         {
             return TestOutcome.NotTestable(obstacle);

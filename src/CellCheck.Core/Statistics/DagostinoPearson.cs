@@ -34,7 +34,8 @@ public static class DagostinoPearson
             return TestOutcome.NotTestable(NotTestableReason.ZeroSpread);
         }
 
-        var moments = CentralMoments.Of(sample);
+        var scale = SampleGuard.ScaleFor(sample);
+        var moments = scale == 1.0 ? CentralMoments.Of(sample) : CentralMoments.Of(SampleGuard.Scaled(sample, scale));
         var zs = SkewnessZFromMoments(moments);
         var zk = KurtosisZFromMoments(moments);
         var k2 = (zs * zs) + (zk * zk);

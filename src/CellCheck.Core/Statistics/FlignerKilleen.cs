@@ -33,7 +33,7 @@ public static class FlignerKilleen
     public static TestOutcome Test(GroupedValues groups)
     {
         ArgumentNullException.ThrowIfNull(groups);
-        var part = GroupFilter.AtLeast(groups, 2);
+        var part = GroupFilter.AtLeast(SampleGuard.Scaled(groups), 2);
         if (part.GroupCount < 2)
         {
             return TestOutcome.NotTestable(NotTestableReason.TooFewGroups);

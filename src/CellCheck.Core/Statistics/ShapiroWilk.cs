@@ -118,6 +118,12 @@ public static class ShapiroWilk
 
     private static TestOutcome FromSorted(ReadOnlySpan<double> x)
     {
+        if (SampleGuard.ScaleFor(x) is var scale && scale != 1.0)
+        {
+            // Extreme magnitudes: rescale exactly by a power of two so that the range and squares stay finite.
+            return FromSorted(SampleGuard.Scaled(x, scale));
+        }
+
         var n = x.Length;
         if (n < 3)
         {

@@ -24,7 +24,7 @@ internal sealed record ColumnMap(int[] Factors, int[] Responses, int? RunOrder, 
             }
 
             var near = Suggest.Closest(column, header);
-            var shown = string.Join(", ", header.Take(12)) + (header.Count > 12 ? ", ..." : string.Empty);
+            var shown = string.Join(", ", header.Take(12).Select(h => h.Length <= 40 ? h : h[..37] + "...")) + (header.Count > 12 ? ", ..." : string.Empty);
             problems.Add(new Problem(ProblemCodes.MissingColumn, design.Path, mark.Line, mark.Column,
                 $"The column '{column}' is not in the header of {design.DataText} (columns: {shown}).",
                 near is null ? "Write the column name exactly as in the data file's header." : $"Did you mean '{near}'?")

@@ -1,17 +1,27 @@
+using System.Globalization;
+using CellCheck.Core.Problems;
 using nietras.SeparatedValues;
 
 namespace CellCheck.IO.Data;
 
-/// <summary>Delimited text through Sep: separator declared or detected from the header; quoted fields; UTF-8 with or without BOM.</summary>
+/// <summary>
+/// Delimited text through Sep: separator declared or detected from the header; quoted fields; UTF-8 with or without BOM.
+/// Blank lines are skipped. A row with another number of fields than the header stops reading with a located
+/// <see cref="Fault"/>, and so (at the end) does a used field that runs over several lines, the mark of a quote
+/// that was never closed.
+/// </summary>
 internal sealed class CsvRows : ITableRows
 {
     private readonly SepReader _reader;
+    private readonly string _path;
+    private bool _multiline;
 
     public CsvRows(string path, char? delimiter, NumberSyntax numbers)
     {
+        _path = path;
         _reader = delimiter is { } d
-            ? Sep.New(d).Reader(o => o with { Unescape = true }).FromFile(path)
-            : Sep.Reader(o => o with { Unescape = true }).FromFile(path);
+            ? Sep.New(d).Reader(o => o with { Unescape = true, DisableColCountCheck = true }).FromFile(path)
+            : Sep.Reader(o => o with { Unescape = true, DisableColCountCheck = true }).FromFile(path);
         Header = _reader.Header.ColNames;
         Numbers = numbers;
     }
@@ -27,21 +37,56 @@ internal sealed class CsvRows : ITableRows
 
     public bool IsEmpty => _reader.Header.IsEmpty;
 
+    public Problem? Fault { get; private set; }
+
     public bool Next()
     {
-        if (!_reader.MoveNext())
+        while (_reader.MoveNext())
         {
-            return false;
+            var row = _reader.Current;
+            Line = row.LineNumberFrom;
+            NextLine = row.LineNumberToExcl;
+            if (row.ColCount == 1 && row[0].Span.IsWhiteSpace() && Header.Count > 1)
+            {
+                continue;
+            }
+
+            if (row.ColCount != Header.Count)
+            {
+                Fault ??= NextLine - Line > 1
+                    ? new Problem(ProblemCodes.UnclosedQuote, _path, Line, null,
+                        $"The row that starts on line {Text(Line)} runs over lines {Text(Line)} to {Text(NextLine - 1)} and has {Text(row.ColCount)} field(s) where the header has {Text(Header.Count)}: a quote on line {Text(Line)} is probably not closed.",
+                        "Close the quote on that line (a quote inside a quoted field is written twice: \"\").")
+                    : new Problem(ProblemCodes.RaggedRow, _path, Line, null,
+                        $"Line {Text(Line)} has {Text(row.ColCount)} field(s) but the header has {Text(Header.Count)}.",
+                        "Check for a missing or extra separator on this line, or a quote that is not closed.");
+                return false;
+            }
+
+            _multiline = NextLine - Line > 1;
+            return true;
         }
 
-        Line = _reader.Current.LineNumberFrom;
-        NextLine = _reader.Current.LineNumberToExcl;
-        return true;
+        return false;
     }
 
-    public ReadOnlySpan<char> Cell(int column) => _reader.Current[column].Span.Trim();
+    public ReadOnlySpan<char> Cell(int column)
+    {
+        var cell = _reader.Current[column].Span.Trim();
+        if (_multiline && Fault is null && cell.IndexOfAny('\r', '\n') >= 0)
+        {
+            Fault = new Problem(ProblemCodes.UnclosedQuote, _path, Line, column + 1,
+                $"The quoted field in column '{Header[column]}' that opens on line {Text(Line)} runs over lines {Text(Line)} to {Text(NextLine - 1)}: a closing quote is probably missing.",
+                "Close the quote on that line (a quote inside a quoted field is written twice: \"\"), or remove the line break from the field.")
+            { ColumnName = Header[column] };
+        }
 
-    public string Locate(int line, int column) => "line " + line.ToString(System.Globalization.CultureInfo.InvariantCulture);
+        return cell;
+    }
+
+    public string Locate(int line, int column) => "line " + Text(line);
 
     public void Dispose() => _reader.Dispose();
+
+    private static string Text(int value) => value.ToString(CultureInfo.InvariantCulture);
 }

@@ -1,3 +1,5 @@
+using CellCheck.Core.Problems;
+
 namespace CellCheck.IO.Data;
 
 /// <summary>
@@ -13,6 +15,10 @@ internal interface ITableRows : IDisposable
 
     /// <summary>The current row's line in the data file (or its row number in the sheet).</summary>
     int Line { get; }
+
+    /// <summary>The first problem met while reading rows (a ragged row, an unclosed quote, an unreadable sheet), or null.
+    /// Check it once reading has ended: <see cref="Next"/> returns false at a fault that stops reading.</summary>
+    Problem? Fault { get; }
 
     /// <summary>Moves to the next data row; false at the end.</summary>
     bool Next();

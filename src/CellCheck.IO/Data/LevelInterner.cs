@@ -33,8 +33,9 @@ internal sealed class LevelInterner(string name, int capacity)
         _codes.Add(code);
     }
 
-    /// <summary>The first label that is not a number, or null when every label is one.</summary>
-    public string? FirstNonNumeric(NumberSyntax syntax) => _labels.FirstOrDefault(l => double.IsNaN(syntax.ParseDouble(l)));
+    /// <summary>The first label that is not a number that can be computed with (finite, magnitude within the range
+    /// <see cref="ResponseBuilder.InRange"/> allows), or null when every label is one.</summary>
+    public string? FirstNonNumeric(NumberSyntax syntax) => _labels.FirstOrDefault(l => !ResponseBuilder.InRange(syntax.ParseDouble(l)));
 
     public FactorColumn Build(bool asNumbers, NumberSyntax syntax)
     {

@@ -15,7 +15,7 @@ internal static class NumericLevels
             if (spec.Kind == FactorKind.Numeric && factors[f].FirstNonNumeric(syntax) is { } label)
             {
                 problems.Add(new Problem(ProblemCodes.NonNumericLevel, design.Path, spec.Mark.Line, spec.Mark.Column,
-                    $"The factor '{spec.Name}' is declared numeric but its column holds '{label}', which is not a number.",
+                    $"The factor '{spec.Name}' is declared numeric but its column holds '{(label.Length > 40 ? label[..37] + "..." : label)}', which is not a finite number between 1e-100 and 1e100 in magnitude (or 0).",
                     "Correct the value in the data file, or declare the factor kind: categorical."));
             }
         }

@@ -8,7 +8,8 @@ namespace CellCheck.IO.Data;
 /// (value − origin) converted to double, where the origin is the column's first value taken exactly: the shift is
 /// exact, so values with many constant leading digits (NIST StRD SmLs07-09) lose nothing to binary rounding.
 /// Values outside decimal's range fall back to double parsing. Missing and unusable values become NaN with an
-/// exclusion that says why.
+/// exclusion that says why: <c>missing</c>, <c>not-a-number</c>, <c>not-finite</c> (NaN, Inf), <c>out-of-range</c>
+/// (magnitude above 1e100 or, other than 0, below 1e-100) or <c>thousands-separator</c>.
 /// </summary>
 internal sealed class ResponseBuilder(string name, string? unit, int capacity, MissingTokens missing, NumberSyntax syntax)
 {
@@ -46,20 +47,26 @@ internal sealed class ResponseBuilder(string name, string? unit, int capacity, M
         if (text.IndexOfAny('e', 'E') < 0 && decimal.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out var exact))
         {
             _origin ??= exact;
-            _values.Add((double)(exact - _origin.Value));
+            _values.Add(Offset(exact, _origin.Value));
             _decimals = Math.Max(_decimals ?? 0, exact.Scale);
             return;
         }
 
         if (double.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out var value))
         {
-            _exponentSeen = true;
-            if (!double.IsFinite(value))
+            if (double.IsNaN(value) || (double.IsInfinity(value) && NonFinite(text)))
             {
                 Exclude(line, "not-finite", $"not a finite number: '{Clip(raw)}'");
                 return;
             }
 
+            if (!InRange(value))
+            {
+                Exclude(line, "out-of-range", $"magnitude outside 1e-100 to 1e100, too extreme to compute with: '{Clip(raw)}'");
+                return;
+            }
+
+            _exponentSeen = true;
             _origin ??= 0m;
             _values.Add(value - (double)_origin.Value);
             return;
@@ -67,6 +74,26 @@ internal sealed class ResponseBuilder(string name, string? unit, int capacity, M
 
         Exclude(line, NonFinite(text) ? "not-finite" : "not-a-number",
             (NonFinite(text) ? "not a finite number" : "not a number") + $": '{Clip(raw)}'");
+    }
+
+    /// <summary>Values of magnitude above this (or below its reciprocal, other than 0) are excluded as out of range: squares
+    /// and sums of squares of such values overflow or underflow double precision.</summary>
+    public const double MaxMagnitude = 1e100;
+
+    /// <summary>Whether a parsed value can be computed with: finite, and zero or of magnitude within [1/<see cref="MaxMagnitude"/>, <see cref="MaxMagnitude"/>].</summary>
+    public static bool InRange(double value) => double.IsFinite(value) && (value == 0 || (Math.Abs(value) <= MaxMagnitude && Math.Abs(value) >= 1 / MaxMagnitude));
+
+    /// <summary>value − origin, exact in decimal; in double when the difference leaves decimal's range (about 7.9e28).</summary>
+    private static double Offset(decimal value, decimal origin)
+    {
+        try
+        {
+            return (double)(value - origin);
+        }
+        catch (OverflowException)
+        {
+            return (double)value - (double)origin;
+        }
     }
 
     private static bool NonFinite(ReadOnlySpan<char> text)

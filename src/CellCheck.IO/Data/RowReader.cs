@@ -61,6 +61,11 @@ internal static class RowReader
             }
         }
 
+        if (table.Fault is { } fault)
+        {
+            return LoadResult<DesignData>.Failure(fault);
+        }
+
         return Finish(design, table, columns, factors, responses, runOrder, lines, filtered);
     }
 

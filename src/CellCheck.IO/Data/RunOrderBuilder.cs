@@ -22,7 +22,7 @@ internal sealed class RunOrderBuilder(string column, string path, MissingTokens 
             return;
         }
 
-        if (syntax.ParseDouble(text) is var number && double.IsFinite(number))
+        if (syntax.ParseDouble(text) is var number && ResponseBuilder.InRange(number))
         {
             _values.Add(number);
             return;
@@ -36,7 +36,7 @@ internal sealed class RunOrderBuilder(string column, string path, MissingTokens 
 
         _values.Add(double.NaN);
         Problem ??= new Problem(ProblemCodes.BadRunOrder, path, line, null,
-            $"The run-order column '{column}' holds '{text.ToString()}', which is neither a number nor a date and time.",
+            $"The run-order column '{column}' holds '{(text.Length > 40 ? string.Concat(text[..37], "...") : text.ToString())}', which is neither a number (of magnitude up to 1e100) nor a date and time.",
             "Write run positions as numbers (1, 2, 3, ...) or times as 2026-03-01T08:30:00.") { ColumnName = column };
     }
 

@@ -1,5 +1,6 @@
 using CellCheck.Core.Problems;
 using CellCheck.IO.Design;
+using CellCheck.IO.TextFiles;
 
 namespace CellCheck.IO.Data;
 
@@ -11,7 +12,13 @@ internal static class TableOpener
         var path = design.DataPath;
         Problem Fail(string code, int? line, string what, string fix, bool inDesign = false) =>
             inDesign ? new Problem(code, design.Path, design.DataMark.Line, design.DataMark.Column, what, fix) : new Problem(code, path, line, null, what, fix);
-        if (Directory.Exists(path) || !File.Exists(path))
+        if (Directory.Exists(path))
+        {
+            return (null, Fail(ProblemCodes.DataUnreadable, null, $"The data file '{design.DataText}' is a folder, not a file (at {path}).",
+                "Name the data file inside that folder, relative to the design file.", inDesign: true));
+        }
+
+        if (!File.Exists(path))
         {
             return (null, Fail(ProblemCodes.DataNotFound, null, $"The data file '{design.DataText}' does not exist (looked for {path}).",
                 "Give the data file's path relative to the design file.", inDesign: true));
@@ -42,6 +49,11 @@ internal static class TableOpener
             }
             else if (extension is ".csv" or ".tsv" or ".txt")
             {
+                if (ScanText(path) is { } fault)
+                {
+                    return (null, TextProblems.For(fault, path, design: false));
+                }
+
                 var csv = new CsvRows(path, design.Options.Delimiter, new NumberSyntax(design.Options.Decimal, design.Options.Thousands));
                 if (csv.IsEmpty)
                 {
@@ -68,6 +80,18 @@ internal static class TableOpener
             return (null, Fail(ProblemCodes.DataUnreadable, null, "The data file cannot be read: " + FirstLine(ex.Message),
                 "Check that it is a delimited text file or an XLSX workbook, not locked, and readable."));
         }
+        catch (Exception ex) when (extension == ".xlsx" && ex is not OutOfMemoryException)
+        {
+            // A damaged workbook can fail anywhere inside the zip and XML readers, with any exception type.
+            return (null, Fail(ProblemCodes.DataUnreadable, null, "The workbook cannot be read: " + FirstLine(ex.Message),
+                "Open the workbook in a spreadsheet program and save it again, or export the sheet as CSV UTF-8."));
+        }
+    }
+
+    private static TextFault? ScanText(string path)
+    {
+        using var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1 << 16);
+        return TextScan.Scan(stream, TextScan.MaxLineBytes);
     }
 
     private static ITableRows? Dispose(ITableRows table)
@@ -78,6 +102,12 @@ internal static class TableOpener
 
     private static Problem? HeaderProblem(ITableRows table, string path)
     {
+        if (table.Header.Count == 1 && string.IsNullOrWhiteSpace(table.Header[0]))
+        {
+            return new Problem(ProblemCodes.EmptyHeader, path, table is CsvRows ? 1 : table.Line, null, "The header line is blank: the first line must name the columns.",
+                "Remove blank lines above the header, so that the first line names the columns.");
+        }
+
         for (var i = 0; i < table.Header.Count; i++)
         {
             if (string.IsNullOrWhiteSpace(table.Header[i]) && i < table.Header.Count - 1)
@@ -115,9 +145,11 @@ internal static class TableOpener
             && index >= 1 && index <= names.Length ? names[index - 1] : null;
     }
 
+    /// <summary>The first line of a library's message, at most 200 characters (it may quote a whole hostile header).</summary>
     internal static string FirstLine(string message)
     {
         var cut = message.IndexOf('\n', StringComparison.Ordinal);
-        return (cut < 0 ? message : message[..cut]).Trim();
+        var line = (cut < 0 ? message : message[..cut]).Trim();
+        return line.Length <= 200 ? line : line[..197] + "...";
     }
 }

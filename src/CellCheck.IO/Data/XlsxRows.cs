@@ -1,4 +1,5 @@
 using System.Globalization;
+using CellCheck.Core.Problems;
 using MiniExcelLibs;
 
 namespace CellCheck.IO.Data;
@@ -12,11 +13,13 @@ internal sealed class XlsxRows : ITableRows
     private readonly IEnumerator<IDictionary<string, object?>> _rows;
     private readonly string[] _letters;
     private readonly string _sheet;
+    private readonly string _path;
     private IDictionary<string, object?>? _current;
     private string _cell = string.Empty;
 
-    private XlsxRows(IEnumerator<IDictionary<string, object?>> rows, string sheet, int headerRow, IDictionary<string, object?> header)
+    private XlsxRows(string path, IEnumerator<IDictionary<string, object?>> rows, string sheet, int headerRow, IDictionary<string, object?> header)
     {
+        _path = path;
         _rows = rows;
         _sheet = sheet;
         _letters = [.. header.Keys];
@@ -29,6 +32,8 @@ internal sealed class XlsxRows : ITableRows
     public NumberSyntax Numbers => NumberSyntax.Invariant;
 
     public int Line { get; private set; }
+
+    public Problem? Fault { get; private set; }
 
     public static string[] SheetNames(string path) => [.. MiniExcel.GetSheetNames(path)];
 
@@ -45,7 +50,7 @@ internal sealed class XlsxRows : ITableRows
             }
         }
 
-        return new XlsxRows(rows, sheet, headerRow, rows.Current);
+        return new XlsxRows(path, rows, sheet, headerRow, rows.Current);
     }
 
     /// <summary>Column letter of column index <paramref name="column"/>.</summary>
@@ -53,14 +58,25 @@ internal sealed class XlsxRows : ITableRows
 
     public bool Next()
     {
-        while (_rows.MoveNext())
+        try
         {
-            Line++;
-            _current = _rows.Current;
-            if (_current.Values.Any(v => v is not null && Text(v).Length > 0))
+            while (_rows.MoveNext())
             {
-                return true;
+                Line++;
+                _current = _rows.Current;
+                if (_current.Values.Any(v => v is not null && Text(v).Length > 0))
+                {
+                    return true;
+                }
             }
+        }
+        catch (Exception ex) when (ex is not OutOfMemoryException)
+        {
+            // A damaged workbook can fail anywhere inside the zip and XML readers, with any exception type: it is
+            // the user's file that is broken, so it is a located problem, not a crash.
+            Fault ??= new Problem(ProblemCodes.DataUnreadable, _path, Line + 1, null,
+                $"The workbook cannot be read past row {Line.ToString(CultureInfo.InvariantCulture)} of sheet '{_sheet}': {TableOpener.FirstLine(ex.Message)}",
+                "Open the workbook in a spreadsheet program and save it again, or export the sheet as CSV UTF-8.");
         }
 
         return false;

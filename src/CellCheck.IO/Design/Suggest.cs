@@ -3,12 +3,27 @@ namespace CellCheck.IO.Design;
 /// <summary>Finds the closest known word to a misspelt one (Levenshtein distance, at most 2 or a third of the length).</summary>
 internal static class Suggest
 {
+    /// <summary>Words longer than this get no suggestion (names are short; this bounds the work on hostile input).</summary>
+    private const int MaxLength = 200;
+
     public static string? Closest(string word, IEnumerable<string> candidates)
     {
+        var limit = Math.Max(2, word.Length / 3);
+        if (word.Length > MaxLength)
+        {
+            return null;
+        }
+
         string? best = null;
         var bestDistance = int.MaxValue;
         foreach (var c in candidates)
         {
+            if (Math.Abs(c.Length - word.Length) > limit)
+            {
+                // The distance is at least the difference in length: no suggestion, and no quadratic work on long texts.
+                continue;
+            }
+
             var d = Distance(word.ToLowerInvariant(), c.ToLowerInvariant());
             if (d < bestDistance)
             {
@@ -17,8 +32,9 @@ internal static class Suggest
             }
         }
 
-        return bestDistance <= Math.Max(2, word.Length / 3) ? best : null;
+        return bestDistance <= limit ? best : null;
     }
+
 
     private static int Distance(string a, string b)
     {

@@ -42,6 +42,11 @@ public static class DesignScaffold
                 rows++;
             }
 
+            if (table.Fault is { } fault)
+            {
+                return LoadResult<ScaffoldResult>.Failure(fault);
+            }
+
             var profiles = table.Header.Select((h, c) => ColumnProfiler.Profile(h, values[c])).ToList();
             return LoadResult<ScaffoldResult>.Success(new ScaffoldResult(relative, rows, profiles));
         }

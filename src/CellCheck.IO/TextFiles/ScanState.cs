@@ -1,0 +1,93 @@
+namespace CellCheck.IO.TextFiles;
+
+/// <summary>The position and UTF-8 decoding state of <see cref="TextScan"/>; <see cref="Step"/> takes one byte.</summary>
+internal sealed class ScanState(long maxLineBytes)
+{
+    private int _line = 1;
+    private int _column = 1;
+    private long _lineBytes;
+    private bool _afterCr;
+    private int _pending;
+    private byte _low = 0x80;
+    private byte _high = 0xBF;
+    private byte _lead;
+    private int _leadLine;
+    private int _leadColumn;
+
+    public TextFault? Step(byte b)
+    {
+        if (_pending > 0)
+        {
+            if (b < _low || b > _high)
+            {
+                return Invalid();
+            }
+
+            _pending--;
+            (_low, _high) = ((byte)0x80, (byte)0xBF);
+            return CountByte();
+        }
+
+        if (b == (byte)'\r' || (b == (byte)'\n' && !_afterCr))
+        {
+            NewLine(b == (byte)'\r');
+            return null;
+        }
+
+        if (b == (byte)'\n')
+        {
+            _afterCr = false;
+            return null;
+        }
+
+        _afterCr = false;
+        if (b == 0)
+        {
+            return new TextFault(TextFaultKind.NotText, _line, _column, "a NUL byte (0x00)");
+        }
+
+        _lead = b;
+        (_leadLine, _leadColumn) = (_line, _column);
+        _column++;
+        if (b >= 0x80 && !Lead(b))
+        {
+            return Invalid();
+        }
+
+        return CountByte();
+    }
+
+    /// <summary>A fault at the end of the stream: a multi-byte sequence cut short.</summary>
+    public TextFault? End() => _pending > 0 ? Invalid() : null;
+
+    private bool Lead(byte b)
+    {
+        (_pending, _low, _high) = b switch
+        {
+            >= 0xC2 and <= 0xDF => (1, (byte)0x80, (byte)0xBF),
+            0xE0 => (2, (byte)0xA0, (byte)0xBF),
+            0xED => (2, (byte)0x80, (byte)0x9F),
+            >= 0xE1 and <= 0xEF => (2, (byte)0x80, (byte)0xBF),
+            0xF0 => (3, (byte)0x90, (byte)0xBF),
+            >= 0xF1 and <= 0xF3 => (3, (byte)0x80, (byte)0xBF),
+            0xF4 => (3, (byte)0x80, (byte)0x8F),
+            _ => (0, (byte)0x80, (byte)0xBF),
+        };
+        return _pending > 0;
+    }
+
+    private void NewLine(bool cr)
+    {
+        _line++;
+        _column = 1;
+        _lineBytes = 0;
+        _afterCr = cr;
+    }
+
+    private TextFault? CountByte() => ++_lineBytes > maxLineBytes
+        ? new TextFault(TextFaultKind.LineTooLong, _line, null, $"line {_line} is longer than {maxLineBytes / 1024} KiB")
+        : null;
+
+    private TextFault Invalid() => new(TextFaultKind.Encoding, _leadLine, _leadColumn,
+        $"byte {TextScan.Hex(_lead)} at column {_leadColumn} does not start valid UTF-8 (Latin-1 and Windows-1252 write accented letters so)");
+}

@@ -10,7 +10,7 @@ internal static class Program
     internal static int Run(string[] args, TextWriter output, TextWriter error)
     {
         var root = new RootCommand("cellcheck: check the assumptions of an ANOVA (normal residuals within cells, equal spread "
-            + "across cells) before trusting it.\n" + ExitCodes.HelpText)
+            + "across cells, independence in run order, enough replicates) before trusting it.\n" + ExitCodes.HelpText)
         {
             CheckCommand.Create(output, error),
             InitCommand.Create(output, error),

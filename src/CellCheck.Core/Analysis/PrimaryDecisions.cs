@@ -9,7 +9,8 @@ namespace CellCheck.Core.Analysis;
 /// <summary>
 /// Decides each assumption by its primary check: normality and equal spread by the tests <see cref="PrimaryRules"/>
 /// chooses, with p-values from the simulated null distribution of this design shape (or asymptotic above the Monte
-/// Carlo limit), adjusted by Holm across the assumptions judged. Independence is not judged by this version.
+/// Carlo limit), and independence by Durbin-Watson's exact p when a run order is declared, adjusted by Holm across
+/// the assumptions judged.
 /// </summary>
 internal static class PrimaryDecisions
 {

@@ -17,6 +17,7 @@ internal static class ModelChecks
         var notes = new List<string>();
         var checks = new List<CheckResult>();
         var fit = diagnostics.Fit;
+        var settings = Settings(partition, blocks);
         if (fit is not null && diagnostics.Estimable is { } estimable)
         {
             // Tukey's test needs fitted values that are not already a full cell-means fit: an additive model, or
@@ -24,7 +25,7 @@ internal static class ModelChecks
             checks.Add(spec.IsAdditive || blocks.Count > 0
                 ? CheckResults.From(CheckNames.TukeyNonadditivity, TukeyNonadditivity.Test(estimable, fit), alpha)
                 : CheckResults.NotTestable(CheckNames.TukeyNonadditivity, NotTestableReason.NotAdditive));
-            checks.Add(CheckResults.From(CheckNames.LackOfFit, LackOfFit.Test(fit, partition.Values.Values, Settings(partition, blocks)), alpha));
+            checks.Add(CheckResults.From(CheckNames.LackOfFit, LackOfFit.Test(fit, partition.Values.Values, settings), alpha));
         }
         else
         {
@@ -39,7 +40,7 @@ internal static class ModelChecks
         checks.Add(screened == 0
             ? CheckResults.NotTestable(CheckNames.Outliers, NotTestableReason.TooFewResidualDf)
             : new CheckResult(CheckNames.Outliers, Math.Abs(screen[0].T), null, screen[0].PAdjusted, null, StatusRules.FromP(screen[0].PAdjusted, alpha), null));
-        Unreplicated(partition, blocks, residuals, notes);
+        Unreplicated(settings, blocks, residuals, notes);
         var (effects, names) = Effects(partition, blocks, spec, residuals);
         return new ModelResult(info, checks, outliers, screened, effects, names, notes);
     }
@@ -68,9 +69,8 @@ internal static class ModelChecks
         return result;
     }
 
-    private static void Unreplicated(CellPartition partition, IReadOnlyList<FactorColumn> blocks, ResidualSet residuals, List<string> notes)
+    private static void Unreplicated(int[] settings, IReadOnlyList<FactorColumn> blocks, ResidualSet residuals, List<string> notes)
     {
-        var settings = Settings(partition, blocks);
         if (settings.Distinct().Count() == settings.Length)
         {
             notes.Add(blocks.Count > 0

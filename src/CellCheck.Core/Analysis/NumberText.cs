@@ -22,6 +22,9 @@ public static class NumberText
     public static string Fixed(double x, int decimals) =>
         double.IsNaN(x) ? "n/a" : x.ToString("F" + decimals.ToString(CultureInfo.InvariantCulture), CultureInfo.InvariantCulture);
 
+    /// <summary>A range of counts: "5" when both ends agree, else "3 to 6".</summary>
+    public static string Range(int low, int high) => low == high ? Count(low) : Count(low) + " to " + Count(high);
+
     /// <summary>An integer.</summary>
     public static string Count(int n) => n.ToString(CultureInfo.InvariantCulture);
 }

@@ -1,3 +1,4 @@
+using CellCheck.Core.Calibration;
 using CellCheck.Core.Residuals;
 using CellCheck.Core.Statistics;
 
@@ -9,8 +10,6 @@ namespace CellCheck.Core.Analysis;
 /// </summary>
 internal static class PooledChecks
 {
-    public const int ShapiroWilkLimit = 5000;
-
     public static PooledResult Run(ResidualSet residuals, double alpha)
     {
         var values = new List<double>(residuals.Studentized.Length);
@@ -33,9 +32,9 @@ internal static class PooledChecks
                  CheckResults.NotTestable(CheckNames.DagostinoPearson, reason)], notes);
         }
 
-        if (values.Count > ShapiroWilkLimit)
+        if (values.Count > PrimaryRules.ShapiroWilkLimit)
         {
-            notes.Add($"Shapiro-Wilk's p approximation holds up to {ShapiroWilkLimit} values; with {values.Count} the W statistic is shown without p. "
+            notes.Add($"Shapiro-Wilk's p approximation holds up to {PrimaryRules.ShapiroWilkLimit} values; with {values.Count} the W statistic is shown without p. "
                 + "Judge by Anderson-Darling, D'Agostino-Pearson and the size of skewness and kurtosis.");
         }
 

@@ -93,9 +93,8 @@ internal static class VerdictWriter
         }
     }
 
-    private static string ReplicateText(Cells.Census census) => census.MinReplicates == census.MaxReplicates
-        ? NumberText.Count(census.MinReplicates) + (census.MinReplicates == 1 ? " value" : " values")
-        : NumberText.Count(census.MinReplicates) + " to " + NumberText.Count(census.MaxReplicates) + " values";
+    private static string ReplicateText(Cells.Census census) =>
+        NumberText.Range(census.MinReplicates, census.MaxReplicates) + (census.MaxReplicates == 1 ? " value" : " values");
 
     /// <summary>Plain words for a reason code.</summary>
     public static string ReasonText(string? reason) => reason switch

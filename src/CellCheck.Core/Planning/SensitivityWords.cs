@@ -24,9 +24,7 @@ public static class SensitivityWords
         ArgumentNullException.ThrowIfNull(census);
         ArgumentNullException.ThrowIfNull(table);
         var lines = new List<string>();
-        var sizes = census.MinReplicates == census.MaxReplicates
-            ? NumberText.Count(census.MinReplicates)
-            : NumberText.Count(census.MinReplicates) + " to " + NumberText.Count(census.MaxReplicates);
+        var sizes = NumberText.Range(census.MinReplicates, census.MaxReplicates);
         var head = $"Census verdict {Word(verdict.Level)} ({sizes} value(s) per cell, {NumberText.Count(residualDf)} residual df)";
         lines.Add(verdict.Reasons.Count == 0 ? head + "." : head + ": " + string.Join("; ", verdict.Reasons) + ".");
         Best(lines, table, Departure.Lognormal, "a lognormal cell (shape 0.5)");

@@ -12,7 +12,7 @@ internal static class HtmlResponseSection
         sb.Append("<h2>").Append(Html.Text("Response " + r.Response + (r.Unit is null ? string.Empty : " (" + r.Unit + ")"))).Append("</h2>\n");
         var c = r.Census;
         Html.Element(sb, "h3", "Census");
-        Html.Element(sb, "p", $"{c.Cells} cells of {NumberText.Value(c.Combinations, 12)} combinations; {ReplicateText(c)} values per cell; "
+        Html.Element(sb, "p", $"{c.Cells} cells of {NumberText.Value(c.Combinations, 12)} combinations; {NumberText.Range(c.MinReplicates, c.MaxReplicates)} values per cell; "
             + $"{(c.Balanced ? "balanced" : "unbalanced")}; {c.EmptyCount} empty combination(s); {c.Singletons} singleton cell(s); "
             + $"{r.RowsUsed} rows used, {r.Excluded.Count} excluded.");
         if (c.Empty.Count > 0)
@@ -64,7 +64,4 @@ internal static class HtmlResponseSection
     internal static string P(double? v) => v is { } x ? NumberText.P(x) : "-";
 
     private static string Pct(double rate) => NumberText.Fixed(100 * rate, 1) + "%";
-
-    private static string ReplicateText(Core.Cells.Census c) => c.MinReplicates == c.MaxReplicates
-        ? NumberText.Count(c.MinReplicates) : NumberText.Count(c.MinReplicates) + " to " + NumberText.Count(c.MaxReplicates);
 }

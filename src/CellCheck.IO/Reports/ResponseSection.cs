@@ -23,7 +23,7 @@ internal static class ResponseSection
         OrderSection.Write(console, r.Order);
         console.WriteLine();
         var c = r.Census;
-        var replicates = c.MinReplicates == c.MaxReplicates ? NumberText.Count(c.MinReplicates) : NumberText.Count(c.MinReplicates) + " to " + NumberText.Count(c.MaxReplicates);
+        var replicates = NumberText.Range(c.MinReplicates, c.MaxReplicates);
         console.Write(new Text($"Census: {c.Cells} cells of {NumberText.Value(c.Combinations, 12)} combinations, {replicates} values per cell, "
             + $"{(c.Balanced ? "balanced" : "unbalanced")}, {c.EmptyCount} empty, {c.Singletons} singleton(s); "
             + $"{r.RowsUsed} rows used, {r.Excluded.Count} excluded.\n"));

@@ -27,7 +27,8 @@ public static class PlanTerminalWriter
         var plan = run.Plan;
         var d = plan.Design;
         var q = plan.Request;
-        console.Write(new Text($"cellcheck {toolVersion} plan | design {run.Design.Path} | data {run.Design.DataText}\n"));
+        console.Write(new Text($"cellcheck {toolVersion} plan | design {run.Design.Path}\n"));
+        console.Write(new Text($"data {run.Design.DataText}\n"));
         console.Write(new Text($"Planned design: {PlanText.Layout(d)}, balanced; model {string.Join(" + ", d.Terms.Select(d.TermName))}"
             + (d.Blocked ? "; each replicate one complete block" : string.Empty) + ".\n"));
         console.Write(new Text($"alpha {NumberText.Value(q.Alpha)} | target power {NumberText.Fixed(q.Power, 2)} | smallest effect: {PlanText.Effect(q.Effect)}\n"));

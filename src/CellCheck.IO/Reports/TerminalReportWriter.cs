@@ -30,7 +30,8 @@ public static class TerminalReportWriter
         });
         console.Profile.Width = width;
         var d = report.Design;
-        console.Write(new Text($"cellcheck {toolVersion} | design {d.DesignFile} | data {d.DataFile}\n"));
+        console.Write(new Text($"cellcheck {toolVersion} | design {d.DesignFile}\n"));
+        console.Write(new Text($"data {d.DataFile}\n"));
         console.Write(new Text($"alpha {NumberText.Value(d.Alpha)} | within-cell p adjusted ({d.Adjust}) across {d.AdjustAcross} | factors: {string.Join(", ", d.Factors)}"
             + (d.FilteredOut > 0 ? $" | {d.FilteredOut} rows filtered out by where" : string.Empty) + "\n"));
         foreach (var response in report.Responses)

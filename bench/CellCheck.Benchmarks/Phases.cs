@@ -1,0 +1,65 @@
+using System.Diagnostics;
+using System.Globalization;
+using CellCheck.Core.Analysis;
+using CellCheck.Core.Calibration;
+using CellCheck.Core.Cells;
+using CellCheck.Core.Remedies;
+using CellCheck.Core.Residuals;
+using CellCheck.Core.Resolution;
+using CellCheck.IO.Data;
+using CellCheck.IO.Design;
+
+namespace CellCheck.Benchmarks;
+
+/// <summary>Times each phase of one check run on a design (the steps of ResponseAnalyzer, in its order), for profiling.</summary>
+internal static class Phases
+{
+    public static void Run(string designPath)
+    {
+        var clock = Stopwatch.StartNew();
+        var last = 0.0;
+        void Mark(string phase)
+        {
+            var now = clock.Elapsed.TotalSeconds;
+            Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{phase,-14} {now - last,8:F3} s  (heap {GC.GetTotalMemory(false) / 1e6,7:F0} MB, peak working set {Process.GetCurrentProcess().PeakWorkingSet64 / 1e6,7:F0} MB)"));
+            last = now;
+        }
+
+        var file = DesignReader.Read(designPath).Value!;
+        var data = DataReader.Read(file).Value!;
+        Mark("read");
+        var options = new AnalysisOptions(file.Alpha, file.Adjust);
+        var spec = ModelSpecs.From(file);
+        var column = data.Responses[0];
+        var partition = CellPartition.Build(data.Factors, column.Values, data.Blocks);
+        Mark("partition");
+        var census = CensusBuilder.Build(partition);
+        Mark("census");
+        var source = ResidualSources.For(data, spec, "model");
+        var residuals = source.Compute(partition);
+        Mark("residuals");
+        var cells = CellChecks.Run(partition, residuals, column.Origin, options, column.Name);
+        Mark("cells");
+        var pooled = PooledChecks.Run(residuals, options.Alpha);
+        Mark("pooled");
+        var spread = SpreadChecks.Run(partition, residuals, cells, options.Alpha);
+        Mark("spread");
+        var model = ModelChecks.Run(partition, data.Blocks, spec, residuals, data.SourceLines, options.Alpha);
+        Mark("model");
+        var calibration = Calibrator.Calibrate(residuals.NullPlan, options.Alpha, options.Simulation);
+        Mark("calibration");
+        var order = OrderChecks.Run(data, partition, residuals, options.Alpha);
+        Mark("order");
+        var resolution = RecordingStep.Summarize(partition.Values, column.Decimals, residuals.ResidualSd);
+        Mark("resolution");
+        _ = PrimaryDecisions.Decide(partition, residuals, pooled, spread, order, calibration, options.Alpha, resolution, options.Simulation);
+        Mark("decisions");
+        _ = Core.Planning.ReplicatesAssessor.Assess(census, residuals, options);
+        Mark("replicates");
+        var report = ResponseAnalyzer.Analyze(data, 0, options, spec);
+        Mark("whole again");
+        _ = RemedyAnalyzer.Analyze(data, 0, options, spec, report);
+        Mark("remedy");
+        _ = model;
+    }
+}

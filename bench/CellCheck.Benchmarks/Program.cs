@@ -1,0 +1,44 @@
+using System.Globalization;
+using BenchmarkDotNet.Running;
+
+namespace CellCheck.Benchmarks;
+
+/// <summary>
+/// Benchmark entry point.
+/// <c>generate ROWS CELLS DIR</c> writes the seeded screen data and its design;
+/// <c>floor FILE</c> times a bare Sep pass over a file (the parse floor);
+/// <c>kernels [BenchmarkDotNet arguments]</c> runs the kernel suite.
+/// </summary>
+internal static class Program
+{
+    private static int Main(string[] args)
+    {
+        switch (args.FirstOrDefault())
+        {
+            case "generate" when args.Length == 4:
+                var rows = long.Parse(args[1], CultureInfo.InvariantCulture);
+                var cells = int.Parse(args[2], CultureInfo.InvariantCulture);
+                Directory.CreateDirectory(args[3]);
+                var name = $"screen-{Label(rows)}-{cells / 1000}k";
+                ScreenData.Write(Path.Combine(args[3], name + ".csv"), rows, cells, days: 20);
+                ScreenData.WriteDesign(Path.Combine(args[3], name + ".yaml"), name + ".csv");
+                Console.WriteLine(Path.Combine(args[3], name + ".yaml"));
+                return 0;
+            case "floor" when args.Length == 2:
+                var (seconds, count, checksum) = ParseFloor.Run(args[1]);
+                Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{seconds:F3} s, {count} rows, checksum {checksum:G6}"));
+                return 0;
+            case "phases" when args.Length == 2:
+                Phases.Run(args[1]);
+                return 0;
+            case "kernels":
+                BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args[1..]);
+                return 0;
+            default:
+                Console.Error.WriteLine("usage: generate ROWS CELLS DIR | floor FILE | kernels [BenchmarkDotNet arguments]");
+                return 2;
+        }
+    }
+
+    private static string Label(long rows) => rows % 1_000_000 == 0 ? $"{rows / 1_000_000}m" : $"{rows / 1000}k";
+}

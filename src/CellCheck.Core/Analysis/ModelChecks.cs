@@ -15,6 +15,10 @@ internal static class ModelChecks
         var diagnostics = residuals.Diagnostics!;
         var info = diagnostics.Model;
         var notes = new List<string>();
+        if (info.Note is { } note)
+        {
+            notes.Add(note);
+        }
         var checks = new List<CheckResult>();
         var fit = diagnostics.Fit;
         var (settings, settingCount) = Settings(partition, blocks);

@@ -7,11 +7,11 @@ namespace CellCheck.IO.Data;
 /// labels allocate nothing) and every row gets a level index. At the end levels are put in natural order:
 /// numerically when every label is a number, otherwise ordinal text order.
 /// </summary>
-internal sealed class LevelInterner(string name, int capacity)
+internal sealed class LevelInterner(string name)
 {
     private readonly Dictionary<string, int> _index = new(StringComparer.Ordinal);
     private readonly List<string> _labels = [];
-    private readonly List<int> _codes = new(capacity);
+    private readonly ColumnBuffer<int> _codes = new();
 
     public void Add(ReadOnlySpan<char> label)
     {
@@ -65,10 +65,10 @@ internal sealed class LevelInterner(string name, int capacity)
             sorted[rank] = _labels[order[rank]];
         }
 
-        var codes = new int[_codes.Count];
+        var codes = _codes.Detach();
         for (var row = 0; row < codes.Length; row++)
         {
-            var c = _codes[row];
+            var c = codes[row];
             codes[row] = c < 0 ? c : remap[c];
         }
 

@@ -11,11 +11,12 @@ namespace CellCheck.IO.Data;
 /// exclusion that says why: <c>missing</c>, <c>not-a-number</c>, <c>not-finite</c> (NaN, Inf), <c>out-of-range</c>
 /// (magnitude above 1e100 or, other than 0, below 1e-100) or <c>thousands-separator</c>.
 /// </summary>
-internal sealed class ResponseBuilder(string name, string? unit, int capacity, MissingTokens missing, NumberSyntax syntax)
+internal sealed class ResponseBuilder(string name, string? unit, MissingTokens missing, NumberSyntax syntax)
 {
-    private readonly List<double> _values = new(capacity);
+    private readonly ColumnBuffer<double> _values = new();
     private readonly List<ExcludedRow> _excluded = [];
     private decimal? _origin;
+    private (long Mantissa, int Scale)? _plainOrigin;
     private int? _decimals;
     private bool _exponentSeen;
 
@@ -43,10 +44,23 @@ internal sealed class ResponseBuilder(string name, string? unit, int capacity, M
         }
 
         var text = buffer[..length];
+        var plain = PlainDecimal.TryParse(text, out var mantissa, out var scale);
+        if (plain && _plainOrigin is { } po && PlainDecimal.Difference(mantissa, scale, po.Mantissa, po.Scale) is { } difference)
+        {
+            // the exact difference of two scaled integers, rounded once: what the decimal route gives, without decimal
+            _values.Add(difference);
+            _decimals = Math.Max(_decimals ?? 0, scale);
+            return;
+        }
 
         if (text.IndexOfAny('e', 'E') < 0 && decimal.TryParse(text, NumberStyles.Float, CultureInfo.InvariantCulture, out var exact))
         {
-            _origin ??= exact;
+            if (_origin is null)
+            {
+                _origin = exact;
+                _plainOrigin = plain ? (mantissa, scale) : null;
+            }
+
             _values.Add(Offset(exact, _origin.Value));
             _decimals = Math.Max(_decimals ?? 0, exact.Scale);
             return;
@@ -67,7 +81,12 @@ internal sealed class ResponseBuilder(string name, string? unit, int capacity, M
             }
 
             _exponentSeen = true;
-            _origin ??= 0m;
+            if (_origin is null)
+            {
+                _origin = 0m;
+                _plainOrigin = (0, 0);
+            }
+
             _values.Add(value - (double)_origin.Value);
             return;
         }
@@ -113,14 +132,14 @@ internal sealed class ResponseBuilder(string name, string? unit, int capacity, M
     /// <summary>Replaces the last value by an exclusion (used when a later column of the same row excludes it).</summary>
     public void ExcludeLast(int line, string code, string reason)
     {
-        if (!double.IsNaN(_values[^1]))
+        if (!double.IsNaN(_values.Last))
         {
-            _values[^1] = double.NaN;
+            _values.Last = double.NaN;
             _excluded.Add(new ExcludedRow(line, code, reason));
         }
     }
 
-    public ResponseColumn Build() => new(name, unit, (double)(_origin ?? 0m), [.. _values]) { Decimals = _exponentSeen ? null : _decimals };
+    public ResponseColumn Build() => new(name, unit, (double)(_origin ?? 0m), _values.Detach()) { Decimals = _exponentSeen ? null : _decimals };
 
     public IReadOnlyList<ExcludedRow> Excluded => _excluded;
 

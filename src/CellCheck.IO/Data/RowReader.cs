@@ -18,11 +18,11 @@ internal static class RowReader
 
         var missing = new MissingTokens(design.Options.Missing);
         var factorSpecs = design.Factors.Concat(design.Blocks).ToArray();
-        var factors = factorSpecs.Select(f => new LevelInterner(f.Name, 1024)).ToArray();
-        var responses = design.Responses.Select(r => new ResponseBuilder(r.Name, r.Unit, 1024, missing, table.Numbers)).ToArray();
+        var factors = factorSpecs.Select(f => new LevelInterner(f.Name)).ToArray();
+        var responses = design.Responses.Select(r => new ResponseBuilder(r.Name, r.Unit, missing, table.Numbers)).ToArray();
         var runOrder = columns.RunOrder is null ? null : new RunOrderBuilder(design.RunOrder!.Column, path, missing, table.Numbers);
         var where = design.Options.Where.Conditions;
-        var lines = new List<int>(1024);
+        var lines = new ColumnBuffer<int>();
         var filtered = 0;
         while (table.Next())
         {
@@ -90,7 +90,7 @@ internal static class RowReader
     }
 
     private static LoadResult<DesignData> Finish(DesignFile design, ITableRows table, ColumnMap columns, LevelInterner[] factors,
-        ResponseBuilder[] responses, RunOrderBuilder? runOrder, List<int> lines, int filtered)
+        ResponseBuilder[] responses, RunOrderBuilder? runOrder, ColumnBuffer<int> lines, int filtered)
     {
         var path = design.DataPath;
         for (var r = 0; r < responses.Length; r++)
@@ -122,15 +122,16 @@ internal static class RowReader
             return LoadResult<DesignData>.Failure(numericProblems);
         }
 
+        var sourceLines = lines.Detach();
         var built = factors.Select((f, i) => f.Build(i < design.Factors.Count && design.Factors[i].Kind == FactorKind.Numeric, table.Numbers)).ToArray();
         var data = new DesignData(
             built[..design.Factors.Count],
             responses.Select(r => r.Build()).ToArray(),
-            [.. lines],
+            sourceLines,
             responses.Select(r => r.Excluded).ToArray(),
             built[design.Factors.Count..])
         {
-            RunOrder = design.RunOrder is null ? null : runOrder?.Build() ?? lines.Select(l => (double)l).ToArray(),
+            RunOrder = design.RunOrder is null ? null : runOrder?.Build() ?? Array.ConvertAll(sourceLines, l => (double)l),
             RunOrderColumn = design.RunOrder?.Column,
             FilteredOut = filtered,
         };

@@ -10,7 +10,7 @@ namespace CellCheck.IO.Data;
 /// </summary>
 internal sealed class RunOrderBuilder(string column, string path, MissingTokens missing, NumberSyntax syntax)
 {
-    private readonly List<double> _values = [];
+    private readonly ColumnBuffer<double> _values = new();
 
     public Problem? Problem { get; private set; }
 
@@ -40,5 +40,5 @@ internal sealed class RunOrderBuilder(string column, string path, MissingTokens 
             "Write run positions as numbers (1, 2, 3, ...) or times as 2026-03-01T08:30:00.") { ColumnName = column };
     }
 
-    public double[] Build() => [.. _values];
+    public double[] Build() => _values.Detach();
 }

@@ -17,13 +17,14 @@ internal static class CellChecks
         var ad = new TestOutcome[count];
         var moments = new MomentSummary[count];
         var starts = partition.Values.Starts;
-        for (var c = 0; c < count; c++)
+        // cells are independent: tested in parallel, each result in its own slot, so the outcome does not depend on scheduling
+        Parallel.For(0, count, c =>
         {
             var cell = residuals.WithinCellShift ? partition.Values.Group(c) : residuals.Residuals.AsSpan(starts[c], starts[c + 1] - starts[c]);
             sw[c] = ShapiroWilk.Test(cell);
             ad[c] = AndersonDarling.Test(cell);
             moments[c] = Moments.Summarize(partition.Values.Group(c));
-        }
+        });
 
         var swAdjusted = options.JointCells?.Get(response, CheckNames.ShapiroWilk) ?? Adjust(sw, options.Adjust);
         var adAdjusted = options.JointCells?.Get(response, CheckNames.AndersonDarling) ?? Adjust(ad, options.Adjust);

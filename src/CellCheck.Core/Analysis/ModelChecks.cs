@@ -15,9 +15,13 @@ internal static class ModelChecks
         var diagnostics = residuals.Diagnostics!;
         var info = diagnostics.Model;
         var notes = new List<string>();
+        if (info.Note is { } note)
+        {
+            notes.Add(note);
+        }
         var checks = new List<CheckResult>();
         var fit = diagnostics.Fit;
-        var settings = Settings(partition, blocks);
+        var (settings, settingCount) = Settings(partition, blocks);
         if (fit is not null && diagnostics.Estimable is { } estimable)
         {
             // Tukey's test needs fitted values that are not already a full cell-means fit: an additive model, or
@@ -40,45 +44,69 @@ internal static class ModelChecks
         checks.Add(screened == 0
             ? CheckResults.NotTestable(CheckNames.Outliers, NotTestableReason.TooFewResidualDf)
             : new CheckResult(CheckNames.Outliers, Math.Abs(screen[0].T), null, screen[0].PAdjusted, null, StatusRules.FromP(screen[0].PAdjusted, alpha), null));
-        Unreplicated(settings, blocks, residuals, notes);
+        Unreplicated(settingCount, settings.Length, blocks, residuals, notes);
         var (effects, names) = Effects(partition, blocks, spec, residuals);
         return new ModelResult(info, checks, outliers, screened, effects, names, notes);
     }
 
-    /// <summary>Index of each row's identical-settings group (factor cell and block levels), in grouped order.</summary>
-    private static int[] Settings(CellPartition partition, IReadOnlyList<FactorColumn> blocks)
+    /// <summary>Index of each row's identical-settings group (factor cell and block levels), in grouped order, and
+    /// the number of groups. Without blocks a setting is a cell; with blocks, the block levels of each cell are
+    /// numbered in order of first appearance within the cell (rows are grouped by cell, so one small map per cell).</summary>
+    private static (int[] Settings, int Count) Settings(CellPartition partition, IReadOnlyList<FactorColumn> blocks)
     {
-        var groups = new Dictionary<string, int>(StringComparer.Ordinal);
         var result = new int[partition.RowOrder.Length];
+        if (blocks.Count == 0)
+        {
+            for (var c = 0; c < partition.CellCount; c++)
+            {
+                Array.Fill(result, c, partition.Values.Starts[c], partition.Size(c));
+            }
+
+            return (result, partition.CellCount);
+        }
+
+        var count = 0;
+        var local = new Dictionary<long, int>();
         for (var c = 0; c < partition.CellCount; c++)
         {
+            local.Clear();
             for (var i = partition.Values.Starts[c]; i < partition.Values.Starts[c + 1]; i++)
             {
                 var row = partition.RowOrder[i];
-                var key = c.ToString(System.Globalization.CultureInfo.InvariantCulture) + "|" + string.Join("|", blocks.Select(b => b.Codes[row]));
-                if (!groups.TryGetValue(key, out var g))
+                var key = 0L;
+                foreach (var b in blocks)
                 {
-                    g = groups.Count;
-                    groups.Add(key, g);
+                    key = (key * (b.Levels.Count + 1)) + b.Codes[row] + 1;
+                }
+
+                if (!local.TryGetValue(key, out var g))
+                {
+                    g = count++;
+                    local.Add(key, g);
                 }
 
                 result[i] = g;
             }
         }
 
-        return result;
+        return (result, count);
     }
 
-    private static void Unreplicated(int[] settings, IReadOnlyList<FactorColumn> blocks, ResidualSet residuals, List<string> notes)
+    private static void Unreplicated(int settingCount, int rows, IReadOnlyList<FactorColumn> blocks, ResidualSet residuals, List<string> notes)
     {
-        if (settings.Distinct().Count() == settings.Length)
+        if (settingCount == rows)
         {
             notes.Add(blocks.Count > 0
                 ? "Each cell holds one row per block: within-cell variance cannot be estimated apart from the model, so every check here rests on the declared model."
                 : "No setting is replicated: within-cell variance cannot be estimated, so every check here rests on the declared model.");
         }
 
-        var leverageOne = residuals.Diagnostics!.Leverage.Count(h => h >= 1 - 1e-10);
+        var leverageOne = 0;
+        foreach (var h in residuals.Diagnostics!.Leverage)
+        {
+            leverageOne += h >= 1 - 1e-10 ? 1 : 0;
+        }
+
         if (leverageOne > 0)
         {
             notes.Add(leverageOne.ToString(System.Globalization.CultureInfo.InvariantCulture)

@@ -24,35 +24,36 @@ internal static class OrderChecks
         }
 
         var notes = new List<string>();
-        var leverage = residuals.Diagnostics!.Leverage;
-        var use = Enumerable.Range(0, partition.RowOrder.Length)
-            .Where(i => !double.IsNaN(order[partition.RowOrder[i]]) && leverage[i] < 1 - 1e-10)
-            .OrderBy(i => order[partition.RowOrder[i]]).ThenBy(i => partition.RowOrder[i]).ToArray();
-        var missing = partition.RowOrder.Count(r => double.IsNaN(order[r]));
+        var (use, missing) = RunSequence.Used(order, partition, residuals.Diagnostics!.Leverage);
         if (missing > 0)
         {
             notes.Add(NumberText.Count(missing) + " row(s) have no run position and are left out of the order checks.");
         }
 
-        var t = use.Select(i => order[partition.RowOrder[i]]).ToArray();
-        var ties = t.Length - t.Distinct().Count();
+        var t = new double[use.Length];
+        var e = new double[use.Length];
+        var ties = 0;
+        for (var k = 0; k < use.Length; k++)
+        {
+            t[k] = order[partition.RowOrder[use[k]]];
+            e[k] = residuals.Residuals[use[k]];
+            ties += k > 0 && t[k] == t[k - 1] ? 1 : 0;
+        }
+
         if (ties > 0)
         {
             notes.Add(NumberText.Count(ties) + " row(s) share a run position with another (run together); within a shared position they keep file order.");
         }
 
-        var e = use.Select(i => residuals.Residuals[i]).ToArray();
         var checks = new List<CheckResult>();
-        var x = Design(partition, residuals, use);
-        DurbinWatsonResult? dw = null;
-        if (x is null)
+        var dw = DurbinWatsonOf(partition, residuals, use, e);
+        if (dw is null)
         {
             checks.Add(CheckResults.NotTestable(CheckNames.DurbinWatson, NotTestableReason.TooManyValues));
             notes.Add("The design is too large for Durbin-Watson's exact moments; d is judged by the runs test and trend.");
         }
         else
         {
-            dw = DurbinWatson.Test(e, x, DurbinWatsonAlternative.Positive, ExactLimit);
             checks.Add(dw.IsTestable
                 ? new CheckResult(CheckNames.DurbinWatson, dw.D, null, dw.P, null, StatusRules.FromP(dw.P, alpha), null)
                 : CheckResults.NotTestable(CheckNames.DurbinWatson, dw.Reason!));
@@ -62,6 +63,26 @@ internal static class OrderChecks
         var byBlock = data.Blocks.Count == 0 ? [] : ByBlock(data, partition, use, e, t, alpha);
         return new OrderResult(data.RunOrderColumn, e.Length, checks, e.Length > 1 ? LagCorrelation.Lag1(e) : null,
             dw?.ExpectedD, dw?.Method, byBlock, notes);
+    }
+
+    /// <summary>Durbin-Watson on the residuals in run order: for the cell-means fit above the exact limit, from the
+    /// O(n) moments of a group-indicator design; otherwise on the fitted design matrix; null when that is too large.</summary>
+    private static DurbinWatsonResult? DurbinWatsonOf(CellPartition partition, ResidualSet residuals, int[] use, double[] e)
+    {
+        if (residuals.Diagnostics!.Estimable is null && use.Length > ExactLimit)
+        {
+            var cellOf = new int[use.Length];
+            var cells = partition.CellOfGroupedIndex();
+            for (var k = 0; k < use.Length; k++)
+            {
+                cellOf[k] = cells[use[k]];
+            }
+
+            return GroupedDurbinWatson.Test(e, cellOf, partition.CellCount);
+        }
+
+        var x = Design(partition, residuals, use);
+        return x is null ? null : DurbinWatson.Test(e, x, DurbinWatsonAlternative.Positive, ExactLimit);
     }
 
     private static IEnumerable<CheckResult> SignAndTrend(double[] e, double[] t, double alpha)
@@ -80,18 +101,41 @@ internal static class OrderChecks
     {
         var result = new List<BlockOrderResult>();
         var block = data.Blocks[0];
-        for (var level = 0; level < block.Levels.Count; level++)
+        var levels = block.Levels.Count;
+        var counts = new int[levels + 1];
+        foreach (var i in use)
         {
-            var idx = Enumerable.Range(0, use.Length).Where(k => block.Codes[partition.RowOrder[use[k]]] == level).ToArray();
-            if (idx.Length == 0)
+            counts[block.Codes[partition.RowOrder[i]] + 1]++;
+        }
+
+        for (var level = 0; level < levels; level++)
+        {
+            counts[level + 1] += counts[level];
+        }
+
+        // a stable counting sort of the run-ordered residuals by block level keeps run order within each level
+        var eb = new double[use.Length];
+        var tb = new double[use.Length];
+        var next = (int[])counts.Clone();
+        for (var k = 0; k < use.Length; k++)
+        {
+            var at = next[block.Codes[partition.RowOrder[use[k]]]]++;
+            eb[at] = e[k];
+            tb[at] = t[k];
+        }
+
+        for (var level = 0; level < levels; level++)
+        {
+            var length = counts[level + 1] - counts[level];
+            if (length == 0)
             {
                 continue;
             }
 
-            var eb = idx.Select(k => e[k]).ToArray();
-            var tb = idx.Select(k => t[k]).ToArray();
-            result.Add(new BlockOrderResult(block.Levels[level], eb.Length, eb.Length > 1 ? DurbinWatson.Statistic(eb) : null,
-                eb.Length > 1 ? LagCorrelation.Lag1(eb) : null, SignAndTrend(eb, tb, alpha).ToList()));
+            var el = eb.AsSpan(counts[level], length).ToArray();
+            var tl = tb.AsSpan(counts[level], length).ToArray();
+            result.Add(new BlockOrderResult(block.Levels[level], length, length > 1 ? DurbinWatson.Statistic(el) : null,
+                length > 1 ? LagCorrelation.Lag1(el) : null, SignAndTrend(el, tl, alpha).ToList()));
         }
 
         return result;

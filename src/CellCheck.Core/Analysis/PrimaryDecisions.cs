@@ -14,12 +14,17 @@ namespace CellCheck.Core.Analysis;
 /// </summary>
 internal static class PrimaryDecisions
 {
+    /// <summary>The primary normality and spread statistics of the observed residuals (computed apart so that a caller can run it alongside other checks).</summary>
+    public static (double Normality, double Spread) Statistics(CellPartition partition, ResidualSet residuals, ShapeCalibration calibration) =>
+        new PrimaryEvaluator(calibration.Choice, partition.Values.Starts).Stats(residuals.Residuals, residuals.Studentized);
+
     public static List<AssumptionVerdict> Decide(CellPartition partition, ResidualSet residuals, PooledResult pooled, SpreadResult spread,
-        OrderResult order, ShapeCalibration calibration, double alpha, ResolutionSummary? resolution = null, CalibrationSettings? settings = null)
+        OrderResult order, ShapeCalibration calibration, double alpha, ResolutionSummary? resolution = null, CalibrationSettings? settings = null,
+        (double Normality, double Spread)? statistics = null)
     {
         var choice = calibration.Choice;
         double pNormality, pSpread;
-        var (normality, spreadStat) = new PrimaryEvaluator(choice, partition.Values.Starts).Stats(residuals.Residuals, residuals.Studentized);
+        var (normality, spreadStat) = statistics ?? Statistics(partition, residuals, calibration);
 
         var normalityCheck = choice.Normality == NormalityPrimary.ShapiroWilkPooled ? CheckNames.ShapiroWilk : CheckNames.AndersonDarling;
         var spreadCheck = choice.Spread switch

@@ -22,14 +22,27 @@ public static class ResponseAnalyzer
         var census = CensusBuilder.Build(partition);
         var source = ResidualSources.For(data, spec, ModelName(data, spec));
         var residuals = source.Compute(partition);
-        var cells = CellChecks.Run(partition, residuals, column.Origin, options, column.Name);
-        var pooled = PooledChecks.Run(residuals, options.Alpha);
-        var spread = SpreadChecks.Run(partition, residuals, cells, options.Alpha);
-        var model = ModelChecks.Run(partition, data.Blocks, spec, residuals, data.SourceLines, options.Alpha);
+        // the groups of checks are independent given the residuals: run them side by side (each writes only its own result)
+        List<CellResult> cells = null!;
+        SpreadResult spread = null!;
+        PooledResult pooled = null!;
+        ModelResult model = null!;
+        OrderResult order = null!;
+        ResolutionSummary resolution = null!;
         var calibration = Calibrator.Calibrate(residuals.NullPlan, options.Alpha, options.Simulation);
-        var order = OrderChecks.Run(data, partition, residuals, options.Alpha);
-        var resolution = RecordingStep.Summarize(partition.Values, column.Decimals, residuals.ResidualSd);
-        var assumptions = PrimaryDecisions.Decide(partition, residuals, pooled, spread, order, calibration, options.Alpha, resolution, options.Simulation);
+        (double, double) primary = default;
+        Parallel.Invoke(
+            () => primary = PrimaryDecisions.Statistics(partition, residuals, calibration),
+            () =>
+            {
+                cells = CellChecks.Run(partition, residuals, column.Origin, options, column.Name);
+                spread = SpreadChecks.Run(partition, residuals, cells, options.Alpha);
+            },
+            () => pooled = PooledChecks.Run(residuals, options.Alpha),
+            () => order = OrderChecks.Run(data, partition, residuals, options.Alpha),
+            () => model = ModelChecks.Run(partition, data.Blocks, spec, residuals, data.SourceLines, options.Alpha),
+            () => resolution = RecordingStep.Summarize(partition.Values, column.Decimals, residuals.ResidualSd));
+        var assumptions = PrimaryDecisions.Decide(partition, residuals, pooled, spread, order, calibration, options.Alpha, resolution, options.Simulation, primary);
         var verdict = VerdictWriter.Write(new VerdictInputs(census, cells, pooled, spread, partition.Factors, assumptions, calibration.Operating, model) { Resolution = resolution }, options);
         return new ResponseReport(column.Name, column.Unit, partition.Values.Count, data.Excluded[response], census, cells, pooled, spread, verdict)
         {
@@ -37,29 +50,46 @@ public static class ResponseAnalyzer
             Order = order,
             Resolution = resolution,
             Replicates = Planning.ReplicatesAssessor.Assess(census, residuals, options),
-            Rows = Rows(partition, residuals, data.SourceLines, column.Origin) with
-            {
-                RunOrder = data.RunOrder is { } ro ? partition.RowOrder.Select(r => ro[r]).ToArray() : null,
-                BlockCodes = data.Blocks.Select(b => partition.RowOrder.Select(r => b.Codes[r]).ToArray()).ToArray(),
-                BlockLevels = data.Blocks.Select(b => b.Levels).ToArray(),
-            },
+            Rows = Rows(data, partition, residuals, column.Origin),
         };
     }
 
     private static string ModelName(DesignData data, ModelSpec spec) =>
         string.Join(" + ", spec.Terms.Select(t => t.Name(data.Factors)).Concat(data.Blocks.Select(b => b.Name)));
 
-    private static RowDiagnostics Rows(CellPartition partition, ResidualSet r, int[] sourceLines, double origin)
+    private static RowDiagnostics Rows(DesignData data, CellPartition partition, ResidualSet r, double origin)
     {
-        var n = partition.RowOrder.Length;
-        var cells = new int[n];
-        for (var c = 0; c < partition.CellCount; c++)
+        var order = partition.RowOrder;
+        var d = r.Diagnostics!;
+        return new RowDiagnostics(
+            () => Gather(order, data.SourceLines),
+            partition.CellOfGroupedIndex,
+            () =>
+            {
+                var fitted = new double[r.Fitted.Length];
+                for (var i = 0; i < fitted.Length; i++)
+                {
+                    fitted[i] = r.Fitted[i] + origin;
+                }
+
+                return fitted;
+            },
+            r.Residuals, r.Studentized, d.StudentizedExternal, d.Leverage, d.CooksDistance,
+            () => data.RunOrder is { } ro ? Gather(order, ro) : null,
+            () => data.Blocks.Select(b => Gather(order, b.Codes)).ToArray())
         {
-            Array.Fill(cells, c, partition.Values.Starts[c], partition.Size(c));
+            BlockLevels = data.Blocks.Select(b => b.Levels).ToArray(),
+        };
+    }
+
+    private static T[] Gather<T>(int[] order, T[] source)
+    {
+        var result = new T[order.Length];
+        for (var i = 0; i < order.Length; i++)
+        {
+            result[i] = source[order[i]];
         }
 
-        var d = r.Diagnostics!;
-        return new RowDiagnostics(partition.RowOrder.Select(row => sourceLines[row]).ToArray(), cells, r.Fitted.Select(f => f + origin).ToArray(),
-            r.Residuals, r.Studentized, d.StudentizedExternal, d.Leverage, d.CooksDistance);
+        return result;
     }
 }

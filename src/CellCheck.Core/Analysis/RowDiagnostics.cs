@@ -3,20 +3,52 @@ namespace CellCheck.Core.Analysis;
 /// <summary>Per-row diagnostics in cell order: data-file line, cell index, fitted value, residual, internally and
 /// externally studentized residuals, leverage and Cook's distance (NaN where leverage is one), and the run position
 /// (null when no run order was declared; NaN where missing).</summary>
-public sealed record RowDiagnostics(
-    int[] Lines,
-    int[] Cells,
-    double[] Fitted,
-    double[] Residuals,
-    double[] Studentized,
-    double[] StudentizedExternal,
-    double[] Leverage,
-    double[] CooksDistance)
+/// <remarks>The columns that are copies of the data in cell order (lines, cells, fitted values on the response scale,
+/// run positions, block codes) are built on first use, so a run that writes no per-row output (JSON report only)
+/// holds no per-row copy of them: at ten million rows that is several hundred megabytes.</remarks>
+public sealed class RowDiagnostics
 {
-    public double[]? RunOrder { get; init; }
+    private readonly Lazy<int[]> lines;
+    private readonly Lazy<int[]> cells;
+    private readonly Lazy<double[]> fitted;
+    private readonly Lazy<double[]?> runOrder;
+    private readonly Lazy<IReadOnlyList<int[]>> blockCodes;
+
+    public RowDiagnostics(Func<int[]> lines, Func<int[]> cells, Func<double[]> fitted, double[] residuals, double[] studentized,
+        double[] studentizedExternal, double[] leverage, double[] cooksDistance, Func<double[]?> runOrder, Func<IReadOnlyList<int[]>> blockCodes)
+    {
+        this.lines = new Lazy<int[]>(lines);
+        this.cells = new Lazy<int[]>(cells);
+        this.fitted = new Lazy<double[]>(fitted);
+        this.runOrder = new Lazy<double[]?>(runOrder);
+        this.blockCodes = new Lazy<IReadOnlyList<int[]>>(blockCodes);
+        Residuals = residuals;
+        Studentized = studentized;
+        StudentizedExternal = studentizedExternal;
+        Leverage = leverage;
+        CooksDistance = cooksDistance;
+    }
+
+    public int[] Lines => lines.Value;
+
+    public int[] Cells => cells.Value;
+
+    public double[] Fitted => fitted.Value;
+
+    public double[] Residuals { get; }
+
+    public double[] Studentized { get; }
+
+    public double[] StudentizedExternal { get; }
+
+    public double[] Leverage { get; }
+
+    public double[] CooksDistance { get; }
+
+    public double[]? RunOrder => runOrder.Value;
 
     /// <summary>Block level index of each row per block factor (empty without blocks).</summary>
-    public IReadOnlyList<int[]> BlockCodes { get; init; } = [];
+    public IReadOnlyList<int[]> BlockCodes => blockCodes.Value;
 
     /// <summary>Level labels of each block factor, indexed by the codes in <see cref="BlockCodes"/> (empty without blocks).</summary>
     public IReadOnlyList<IReadOnlyList<string>> BlockLevels { get; init; } = [];

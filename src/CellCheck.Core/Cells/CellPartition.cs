@@ -35,6 +35,18 @@ public sealed class CellPartition
     /// <summary>Number of values in cell c.</summary>
     public int Size(int cell) => Values.Size(cell);
 
+    /// <summary>The cell of each position in grouped order.</summary>
+    public int[] CellOfGroupedIndex()
+    {
+        var cells = new int[RowOrder.Length];
+        for (var c = 0; c < CellCount; c++)
+        {
+            Array.Fill(cells, c, Values.Starts[c], Size(c));
+        }
+
+        return cells;
+    }
+
     /// <summary>Level index of factor f in cell c.</summary>
     public int LevelCode(int cell, int factor) => _cellLevels[(cell * Factors.Count) + factor];
 

@@ -15,7 +15,12 @@ public static class LackOfFit
     public static TestOutcome Test(LinearFitResult fit, ReadOnlySpan<double> y, ReadOnlySpan<int> setting)
     {
         ArgumentNullException.ThrowIfNull(fit);
-        var groups = setting.Length == 0 ? 0 : setting.ToArray().Max() + 1;
+        var groups = 0;
+        foreach (var g in setting)
+        {
+            groups = Math.Max(groups, g + 1);
+        }
+
         var sums = new double[groups];
         var counts = new int[groups];
         for (var i = 0; i < y.Length; i++)

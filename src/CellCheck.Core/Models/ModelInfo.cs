@@ -11,4 +11,8 @@ public sealed record ModelInfo(
     int Columns,
     int ResidualDf,
     IReadOnlyList<string> AliasedColumns,
-    IReadOnlyList<string> AliasedTerms);
+    IReadOnlyList<string> AliasedTerms)
+{
+    /// <summary>Why this model stands in for the declared one, when it does (null otherwise).</summary>
+    public string? Note { get; init; }
+}

@@ -13,6 +13,8 @@ namespace CellCheck.Core.Remedies;
 /// intercept, so log RSS(λ) = 2λℓ_r + log RSS(w). Every exponent is ≤ 0, so nothing overflows for large |λ| and
 /// the spread among values near the top is not lost against the constant; and expm1 keeps full precision
 /// near λ = 0, where (y^λ − 1)/λ computed directly cancels (the case scipy's boxcox_llf once got wrong).</para>
+/// <para>For the cell-means model the profile is evaluated from per-cell power sums (<see cref="GroupedPowerSums"/>),
+/// which gives the same ℓ(λ) to rounding at a cost independent of the number of rows.</para>
 /// <para>The model must contain an intercept (every model CellCheck builds does).</para>
 /// </remarks>
 public static class BoxCox
@@ -61,7 +63,10 @@ public static class BoxCox
         }
 
         var logs = Logs(y);
-        var (lambda, max, lower, upper) = ProfileLikelihood.Maximise(l => LogLikelihood(rss, logs, l), SearchLower, SearchUpper);
+        Func<double, double> profile = rss is GroupedRss grouped
+            ? new GroupedPowerSums(grouped.Starts, logs).LogLikelihood
+            : l => LogLikelihood(rss, logs, l);
+        var (lambda, max, lower, upper) = ProfileLikelihood.Maximise(profile, SearchLower, SearchUpper);
         return new PowerFit(PowerFamily.BoxCox, model, y.Length, rss.ResidualDf, lambda, max, lower, upper, SearchLower, SearchUpper, shift);
     }
 

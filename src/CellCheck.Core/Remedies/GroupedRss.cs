@@ -17,6 +17,9 @@ internal sealed class GroupedRss : IResidualSumOfSquares
         this.starts = starts;
     }
 
+    /// <summary>Group boundaries as given to the constructor.</summary>
+    public int[] Starts => starts;
+
     public int Count => starts[^1];
 
     public int ResidualDf => Count - (starts.Length - 1);

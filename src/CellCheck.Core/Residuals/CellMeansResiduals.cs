@@ -9,7 +9,8 @@ namespace CellCheck.Core.Residuals;
 /// s² = Σ_i Σ_j e_ij² / (N − k), internally studentized residual e_ij / (s·√(1 − 1/n_i)).
 /// Singleton cells have leverage 1: residual 0 and studentized residual undefined (NaN).
 /// </summary>
-public sealed class CellMeansResiduals : IResidualSource
+/// <param name="note">Why the cell-means model stands in for a declared model (null when it is the declared model).</param>
+public sealed class CellMeansResiduals(string? note = null) : IResidualSource
 {
     public string Name => "cell-means";
 
@@ -56,7 +57,7 @@ public sealed class CellMeansResiduals : IResidualSource
 
     /// <summary>Leverage 1/n_i; external studentized e / (s_(i) √(1 − h)) with s_(i)² = (RSS − e²/(1 − h)) / (df − 1);
     /// Cook's distance r² h / (k (1 − h)) with k cells (Cook 1977). NaN for singletons.</summary>
-    private static ResidualDiagnostics Diagnose(CellPartition partition, double[] residuals, double rss, int df)
+    private ResidualDiagnostics Diagnose(CellPartition partition, double[] residuals, double rss, int df)
     {
         var grouped = partition.Values;
         var n = residuals.Length;
@@ -87,6 +88,6 @@ public sealed class CellMeansResiduals : IResidualSource
         }
 
         var terms = Models.ModelSpec.Full(partition.Factors.Count).Terms.Select(t => t.Name(partition.Factors)).ToArray();
-        return new ResidualDiagnostics(leverage, external, cooks, new Models.ModelInfo("cell-means", terms, k, k, df, [], []));
+        return new ResidualDiagnostics(leverage, external, cooks, new Models.ModelInfo("cell-means", terms, k, k, df, [], []) { Note = note });
     }
 }

@@ -14,6 +14,20 @@ public static class ResidualSources
         ArgumentNullException.ThrowIfNull(data);
         ArgumentNullException.ThrowIfNull(spec);
         var cellMeans = data.Blocks.Count == 0 && spec.IsFull(data.Factors.Count) && data.Factors.All(f => !f.IsNumeric);
-        return cellMeans ? new CellMeansResiduals() : new ModelResiduals(data.Blocks, spec, modelName);
+        if (cellMeans)
+        {
+            return new CellMeansResiduals();
+        }
+
+        // the QR fit holds the dense n × p design matrix; beyond DenseLimit values it would not fit in memory
+        var rows = data.Responses.Count == 0 ? 0 : (double)data.Responses[0].Values.Length;
+        var columns = 1.0 + data.Blocks.Sum(b => b.Levels.Count - 1.0) + spec.Terms.Sum(t => t.Factors.Aggregate(1.0, (product, f) => product * Math.Max(1, data.Factors[f].IsNumeric ? 1 : data.Factors[f].Levels.Count - 1)));
+        return rows * columns <= DenseLimit || spec.IsFull(data.Factors.Count) is false || data.Factors.Any(f => f.IsNumeric)
+            ? new ModelResiduals(data.Blocks, spec, modelName)
+            : new CellMeansResiduals("The declared model (" + modelName + ") has about " + Analysis.NumberText.Count((int)Math.Min(int.MaxValue, columns)) + " columns over " + Analysis.NumberText.Count((int)rows) + " rows, too large for the dense least-squares fit; "
+                + "residuals are taken about the cell means instead, so block differences stay in the residuals and the within-cell spread is overstated by them.");
     }
+
+    /// <summary>Largest n·p (design matrix values, 8 bytes each) fitted by dense QR: 2·10⁸, 1.6 GB.</summary>
+    public const double DenseLimit = 2e8;
 }

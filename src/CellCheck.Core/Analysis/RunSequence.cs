@@ -1,0 +1,149 @@
+using CellCheck.Core.Cells;
+
+namespace CellCheck.Core.Analysis;
+
+/// <summary>
+/// The residuals that enter the order checks, in run order: positions (in the partition's grouped order) of rows
+/// with a run position and leverage below one, sorted by run position, ties kept in file order. Linear time when
+/// the file is already in run order (logged data) or the run positions are integers over a range not much wider
+/// than the row count (a stable counting sort); a comparison sort otherwise.
+/// </summary>
+internal static class RunSequence
+{
+    public static (int[] Use, int Missing) Used(double[] order, CellPartition partition, double[] leverage)
+    {
+        var rows = order.Length;
+        var grouped = new int[rows];
+        Array.Fill(grouped, -1);
+        for (var i = 0; i < partition.RowOrder.Length; i++)
+        {
+            grouped[partition.RowOrder[i]] = i;
+        }
+
+        var missing = 0;
+        var count = 0;
+        var sorted = true;
+        var integral = true;
+        double low = double.PositiveInfinity, high = double.NegativeInfinity, previous = double.NegativeInfinity;
+        for (var r = 0; r < rows; r++)
+        {
+            var i = grouped[r];
+            if (i < 0)
+            {
+                continue;
+            }
+
+            var t = order[r];
+            if (double.IsNaN(t))
+            {
+                missing++;
+                grouped[r] = -1;
+                continue;
+            }
+
+            if (!(leverage[i] < 1 - 1e-10))
+            {
+                grouped[r] = -1;
+                continue;
+            }
+
+            count++;
+            sorted &= t >= previous;
+            previous = t;
+            integral &= t == Math.Floor(t);
+            low = Math.Min(low, t);
+            high = Math.Max(high, t);
+        }
+
+        var use = new int[count];
+        if (sorted || count == 0)
+        {
+            Collect(grouped, use);
+        }
+        else if (integral && high - low <= (4.0 * count) + 16)
+        {
+            CountingSort(order, grouped, use, low, (int)(high - low) + 1);
+        }
+        else
+        {
+            ComparisonSort(order, grouped, use);
+        }
+
+        return (use, missing);
+    }
+
+    private static void Collect(int[] grouped, int[] use)
+    {
+        var k = 0;
+        foreach (var i in grouped)
+        {
+            if (i >= 0)
+            {
+                use[k++] = i;
+            }
+        }
+    }
+
+    private static void CountingSort(double[] order, int[] grouped, int[] use, double low, int width)
+    {
+        var starts = new int[width + 1];
+        for (var r = 0; r < grouped.Length; r++)
+        {
+            if (grouped[r] >= 0)
+            {
+                starts[(int)(order[r] - low) + 1]++;
+            }
+        }
+
+        for (var k = 0; k < width; k++)
+        {
+            starts[k + 1] += starts[k];
+        }
+
+        for (var r = 0; r < grouped.Length; r++)
+        {
+            if (grouped[r] >= 0)
+            {
+                use[starts[(int)(order[r] - low)]++] = grouped[r];
+            }
+        }
+    }
+
+    private static void ComparisonSort(double[] order, int[] grouped, int[] use)
+    {
+        var keys = new double[use.Length];
+        var rowsOf = new int[use.Length];
+        var k = 0;
+        for (var r = 0; r < grouped.Length; r++)
+        {
+            if (grouped[r] >= 0)
+            {
+                keys[k] = order[r];
+                rowsOf[k++] = r;
+            }
+        }
+
+        Array.Sort(keys, rowsOf);
+        // equal run positions keep file order
+        for (var a = 0; a < keys.Length;)
+        {
+            var b = a + 1;
+            while (b < keys.Length && keys[b] == keys[a])
+            {
+                b++;
+            }
+
+            if (b - a > 1)
+            {
+                Array.Sort(rowsOf, a, b - a);
+            }
+
+            a = b;
+        }
+
+        for (k = 0; k < use.Length; k++)
+        {
+            use[k] = grouped[rowsOf[k]];
+        }
+    }
+}

@@ -25,6 +25,7 @@ BENCH=bench/CellCheck.Benchmarks/bin/Release/net10.0/CellCheck.Benchmarks
 CELLCHECK=src/CellCheck.Cli/bin/Release/net10.0/cellcheck
 PYTHON=/usr/bin/python3   # the Debian python, which has the Debian scipy and pandas
 
+LOAD=$(cut -d' ' -f1-3 /proc/loadavg)   # before anything runs: other work on the machine skews the timings
 echo "building Release ..."
 dotnet build bench/CellCheck.Benchmarks -c Release -nologo -v q >/dev/null
 dotnet build src/CellCheck.Cli -c Release -nologo -v q >/dev/null
@@ -46,6 +47,7 @@ fi
 machine() {
   echo "- CPU: $(nproc) cores, $(grep -m1 'model name' /proc/cpuinfo | cut -d: -f2- | sed 's/^ *//')"
   echo "- RAM: $(awk '/MemTotal/ {printf "%.1f GB", $2 / 1048576}' /proc/meminfo)"
+  echo "- load average before the run: $LOAD"
   echo "- .NET SDK: $(dotnet --version)"
   [[ $HAVE_R == yes ]] && echo "- $(Rscript -e 'cat(R.version.string, "; data.table", format(packageVersion("data.table")))')"
   [[ $HAVE_PY == yes ]] && echo "- $($PYTHON -c 'import sys, scipy, pandas, numpy; print(f"Python {sys.version.split()[0]}; scipy {scipy.__version__}; pandas {pandas.__version__}; numpy {numpy.__version__}")')"
@@ -59,7 +61,7 @@ measure() {
   shift 2
   /usr/bin/time -f "%e %M" -o "$OUT/$name.time" timeout "$TIMEOUT" "$@" >"$OUT/$name.log" 2>&1 || code=$?
   if [[ " $ok " == *" $code "* ]]; then
-    read -r SECONDS_ KB <"$OUT/$name.time"
+    read -r SECONDS_ KB < <(tail -n 1 "$OUT/$name.time")   # after "Command exited with non-zero status 1"
     MB_=$(awk -v kb="$KB" 'BEGIN { printf "%.0f", kb / 1024 }')
   elif ((code == 124)); then
     echo "  $name ran over $TIMEOUT s and was stopped" >&2

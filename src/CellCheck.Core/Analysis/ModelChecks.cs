@@ -21,7 +21,7 @@ internal static class ModelChecks
         }
         var checks = new List<CheckResult>();
         var fit = diagnostics.Fit;
-        var (settings, settingCount) = Settings(partition, blocks);
+        var (settings, settingCount) = SettingGroups.Of(partition, blocks);
         if (fit is not null && diagnostics.Estimable is { } estimable)
         {
             // Tukey's test needs fitted values that are not already a full cell-means fit: an additive model, or
@@ -30,6 +30,13 @@ internal static class ModelChecks
                 ? CheckResults.From(CheckNames.TukeyNonadditivity, TukeyNonadditivity.Test(estimable, fit), alpha)
                 : CheckResults.NotTestable(CheckNames.TukeyNonadditivity, NotTestableReason.NotAdditive));
             checks.Add(CheckResults.From(CheckNames.LackOfFit, LackOfFit.Test(fit, partition.Values.Values, settings), alpha));
+        }
+        else if (diagnostics.Absorbed is { } absorbed)
+        {
+            var rss = residuals.ResidualSd * residuals.ResidualSd * residuals.ResidualDf;
+            checks.Add(CheckResults.From(CheckNames.TukeyNonadditivity,
+                TukeyNonadditivity.Test(residuals.Residuals, residuals.Fitted, rss, residuals.ResidualDf, absorbed), alpha));
+            checks.Add(CheckResults.From(CheckNames.LackOfFit, LackOfFit.Test(residuals.ResidualDf, rss, partition.Values.Values, settings), alpha));
         }
         else
         {
@@ -47,49 +54,6 @@ internal static class ModelChecks
         Unreplicated(settingCount, settings.Length, blocks, residuals, notes);
         var (effects, names) = Effects(partition, blocks, spec, residuals);
         return new ModelResult(info, checks, outliers, screened, effects, names, notes);
-    }
-
-    /// <summary>Index of each row's identical-settings group (factor cell and block levels), in grouped order, and
-    /// the number of groups. Without blocks a setting is a cell; with blocks, the block levels of each cell are
-    /// numbered in order of first appearance within the cell (rows are grouped by cell, so one small map per cell).</summary>
-    private static (int[] Settings, int Count) Settings(CellPartition partition, IReadOnlyList<FactorColumn> blocks)
-    {
-        var result = new int[partition.RowOrder.Length];
-        if (blocks.Count == 0)
-        {
-            for (var c = 0; c < partition.CellCount; c++)
-            {
-                Array.Fill(result, c, partition.Values.Starts[c], partition.Size(c));
-            }
-
-            return (result, partition.CellCount);
-        }
-
-        var count = 0;
-        var local = new Dictionary<long, int>();
-        for (var c = 0; c < partition.CellCount; c++)
-        {
-            local.Clear();
-            for (var i = partition.Values.Starts[c]; i < partition.Values.Starts[c + 1]; i++)
-            {
-                var row = partition.RowOrder[i];
-                var key = 0L;
-                foreach (var b in blocks)
-                {
-                    key = (key * (b.Levels.Count + 1)) + b.Codes[row] + 1;
-                }
-
-                if (!local.TryGetValue(key, out var g))
-                {
-                    g = count++;
-                    local.Add(key, g);
-                }
-
-                result[i] = g;
-            }
-        }
-
-        return (result, count);
     }
 
     private static void Unreplicated(int settingCount, int rows, IReadOnlyList<FactorColumn> blocks, ResidualSet residuals, List<string> notes)

@@ -69,10 +69,26 @@ internal static class OrderChecks
     /// O(n) moments of a group-indicator design; otherwise on the fitted design matrix; null when that is too large.</summary>
     private static DurbinWatsonResult? DurbinWatsonOf(CellPartition partition, ResidualSet residuals, int[] use, double[] e)
     {
+        var cells = partition.CellOfGroupedIndex();
+        if (residuals.Diagnostics!.Absorbed is { } absorbed)
+        {
+            var cellRun = new int[use.Length];
+            var dummyRun = absorbed.Dummy.Select(_ => new int[use.Length]).ToArray();
+            for (var k = 0; k < use.Length; k++)
+            {
+                cellRun[k] = cells[use[k]];
+                for (var j = 0; j < dummyRun.Length; j++)
+                {
+                    dummyRun[j][k] = absorbed.Dummy[j][use[k]];
+                }
+            }
+
+            return CellBlockDurbinWatson.Test(e, cellRun, partition.CellCount, dummyRun, absorbed.P);
+        }
+
         if (residuals.Diagnostics!.Estimable is null && use.Length > ExactLimit)
         {
             var cellOf = new int[use.Length];
-            var cells = partition.CellOfGroupedIndex();
             for (var k = 0; k < use.Length; k++)
             {
                 cellOf[k] = cells[use[k]];

@@ -15,6 +15,12 @@ public static class LackOfFit
     public static TestOutcome Test(LinearFitResult fit, ReadOnlySpan<double> y, ReadOnlySpan<int> setting)
     {
         ArgumentNullException.ThrowIfNull(fit);
+        return Test(fit.ResidualDf, fit.ResidualSumOfSquares, y, setting);
+    }
+
+    /// <summary>The test for any fit given by its residual degrees of freedom and residual sum of squares.</summary>
+    public static TestOutcome Test(int residualDf, double residualSumOfSquares, ReadOnlySpan<double> y, ReadOnlySpan<int> setting)
+    {
         var groups = 0;
         foreach (var g in setting)
         {
@@ -38,7 +44,7 @@ public static class LackOfFit
 
         var used = counts.Count(c => c > 0);
         var dfPure = y.Length - used;
-        var dfLack = fit.ResidualDf - dfPure;
+        var dfLack = residualDf - dfPure;
         if (dfPure < 1 || dfLack < 1)
         {
             return TestOutcome.NotTestable(dfPure < 1 ? NotTestableReason.NoPureError : NotTestableReason.SaturatedModel);
@@ -49,7 +55,7 @@ public static class LackOfFit
             return TestOutcome.NotTestable(NotTestableReason.ZeroSpread);
         }
 
-        var lack = Math.Max(0, fit.ResidualSumOfSquares - pure);
+        var lack = Math.Max(0, residualSumOfSquares - pure);
         var f = lack / dfLack / (pure / dfPure);
         return new TestOutcome(f, UpperTail.F(f, dfLack, dfPure), dfLack, dfPure);
     }

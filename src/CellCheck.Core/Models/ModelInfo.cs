@@ -15,4 +15,7 @@ public sealed record ModelInfo(
 {
     /// <summary>Why this model stands in for the declared one, when it does (null otherwise).</summary>
     public string? Note { get; init; }
+
+    /// <summary>True when the model is cells plus additive blocks fitted by absorbing the cells (<see cref="CellBlockFit"/>).</summary>
+    public bool Absorbed { get; init; }
 }

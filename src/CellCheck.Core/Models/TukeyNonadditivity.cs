@@ -22,23 +22,48 @@ public static class TukeyNonadditivity
 
         var squared = fit.Fitted.Select(v => v * v).ToArray();
         var z = LinearFit.Fit(estimableDesign, squared).Residuals;
-        var ez = 0.0;
-        var zz = 0.0;
-        for (var i = 0; i < z.Length; i++)
+        return FromProjection(fit.Residuals, squared, z, fit.ResidualSumOfSquares, fit.ResidualDf);
+    }
+
+    /// <summary>The same test for a fit given by its residualizing map (the absorbed cells-plus-blocks fit).</summary>
+    internal static TestOutcome Test(double[] residuals, double[] fitted, double rss, int residualDf, CellBlockFit fit)
+    {
+        if (residualDf < 2)
         {
-            ez += fit.Residuals[i] * z[i];
-            zz += z[i] * z[i];
+            return TestOutcome.NotTestable(NotTestableReason.NoResidualDegreesOfFreedom);
         }
 
-        var scale = squared.Sum(v => v * v);
-        if (!(zz > 1e-20 * scale) || !(fit.ResidualSumOfSquares > 0))
+        var squared = new double[fitted.Length];
+        for (var i = 0; i < squared.Length; i++)
+        {
+            squared[i] = fitted[i] * fitted[i];
+        }
+
+        var z = new double[squared.Length];
+        fit.Residualize(squared, z);
+        return FromProjection(residuals, squared, z, rss, residualDf);
+    }
+
+    private static TestOutcome FromProjection(double[] residuals, double[] squared, double[] z, double rss, int residualDf)
+    {
+        var ez = 0.0;
+        var zz = 0.0;
+        var scale = 0.0;
+        for (var i = 0; i < z.Length; i++)
+        {
+            ez += residuals[i] * z[i];
+            zz += z[i] * z[i];
+            scale += squared[i] * squared[i];
+        }
+
+        if (!(zz > 1e-20 * scale) || !(rss > 0))
         {
             return TestOutcome.NotTestable(NotTestableReason.DegenerateWithinGroups);
         }
 
         var ssn = ez * ez / zz;
-        var df2 = fit.ResidualDf - 1;
-        var f = ssn / Math.Max(0, (fit.ResidualSumOfSquares - ssn) / df2);
+        var df2 = residualDf - 1;
+        var f = ssn / Math.Max(0, (rss - ssn) / df2);
         return new TestOutcome(f, UpperTail.F(f, 1, df2), 1, df2);
     }
 }

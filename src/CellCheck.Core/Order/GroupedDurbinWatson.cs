@@ -53,6 +53,17 @@ public static class GroupedDurbinWatson
     /// <summary>E[d], Var[d] and the number of groups present (p) for a group sequence in run order.</summary>
     public static (double Mean, double Variance, int Groups) Moments(ReadOnlySpan<int> group, int groups)
     {
+        var (traceMA, traceMA2, p) = Traces(group, groups);
+        return (traceMA / (group.Length - p), Variance(traceMA, traceMA2, group.Length - p), p);
+    }
+
+    /// <summary>Var[d] = 2(ν·tr((MA)²) − tr(MA)²)/(ν²(ν + 2)).</summary>
+    internal static double Variance(double traceMA, double traceMA2, double nu) =>
+        Math.Max(0.0, 2.0 * ((nu * traceMA2) - (traceMA * traceMA)) / (nu * nu * (nu + 2)));
+
+    /// <summary>tr(MA), tr((MA)²) and the number of groups present, for M the residual projector of the group indicators.</summary>
+    internal static (double TraceMA, double TraceMA2, int Groups) Traces(ReadOnlySpan<int> group, int groups)
+    {
         var n = group.Length;
         var size = new int[groups];
         foreach (var g in group)
@@ -131,10 +142,7 @@ public static class GroupedDurbinWatson
 
         var traceMA = (2.0 * (n - 1)) - traceHA;
         var traceMA2 = (6.0 * n) - 8 - (2 * traceHA2) + traceHAHA;
-        var nu = (double)(n - p);
-        var mean = traceMA / nu;
-        var variance = Math.Max(0.0, 2.0 * ((nu * traceMA2) - (traceMA * traceMA)) / (nu * nu * (nu + 2)));
-        return (mean, variance, p);
+        return (traceMA, traceMA2, p);
     }
 
     private static void Step(int[] between, List<int> touched, int other)

@@ -63,9 +63,12 @@ public static class BoxCox
         }
 
         var logs = Logs(y);
-        Func<double, double> profile = rss is GroupedRss grouped
-            ? new GroupedPowerSums(grouped.Starts, logs).LogLikelihood
-            : l => LogLikelihood(rss, logs, l);
+        Func<double, double> profile = rss switch
+        {
+            GroupedRss grouped => new GroupedPowerSums(grouped.Starts, logs).LogLikelihood,
+            SettingRss settings => new GroupedPowerSums(settings.Starts, Array.ConvertAll(settings.Permutation, i => logs[i]), settings.Between).LogLikelihood,
+            _ => l => LogLikelihood(rss, logs, l),
+        };
         var (lambda, max, lower, upper) = ProfileLikelihood.Maximise(profile, SearchLower, SearchUpper);
         return new PowerFit(PowerFamily.BoxCox, model, y.Length, rss.ResidualDf, lambda, max, lower, upper, SearchLower, SearchUpper, shift);
     }

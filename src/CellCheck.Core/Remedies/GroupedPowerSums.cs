@@ -1,3 +1,5 @@
+using CellCheck.Core.Models;
+
 namespace CellCheck.Core.Remedies;
 
 /// <summary>
@@ -15,6 +17,10 @@ namespace CellCheck.Core.Remedies;
 /// truncation error is below n·2³⁰/30! ≈ 4·10⁻²⁴·n relative to Σe², far below double precision for any n this
 /// tool reads. Cells whose logs spread further are evaluated row by row with <see cref="PreciseMath.ExpM1"/>, as
 /// <see cref="BoxCox"/> does for every model. Cells are combined by log-sum-exp, so nothing overflows for large |λ|.</para>
+/// <para>For cells plus additive blocks the groups are the identical settings (a cell within a block): the residual sum
+/// of squares is the within-group part above plus the weighted residual sum of squares of the group means of w on the
+/// model, fitted by <see cref="CellBlockFit"/> with the group sizes as weights (the fit of a model that is constant
+/// within groups splits this way).</para>
 /// </remarks>
 internal sealed class GroupedPowerSums
 {
@@ -27,12 +33,16 @@ internal sealed class GroupedPowerSums
     private readonly double[] reach;
     private readonly double[] sums;
     private readonly double sumLog;
+    private readonly CellBlockFit? between;
 
-    /// <param name="starts">Cell g holds rows starts[g] .. starts[g + 1] − 1 of <paramref name="logs"/>.</param>
-    /// <param name="logs">log y of every row, grouped by cell.</param>
-    public GroupedPowerSums(int[] starts, double[] logs)
+    /// <param name="starts">Group g holds rows starts[g] .. starts[g + 1] − 1 of <paramref name="logs"/>.</param>
+    /// <param name="logs">log y of every row, grouped.</param>
+    /// <param name="between">For groups that are not the model's cells (identical settings of cells and blocks), the
+    /// weighted fit of the model to the group means; null when the groups are the cells of the cell-means model.</param>
+    public GroupedPowerSums(int[] starts, double[] logs, CellBlockFit? between = null)
     {
         this.starts = starts;
+        this.between = between;
         this.logs = logs;
         var groups = starts.Length - 1;
         centre = new double[groups];
@@ -74,19 +84,42 @@ internal sealed class GroupedPowerSums
         var top = double.NegativeInfinity;
         for (var g = 0; g < groups; g++)
         {
-            if (starts[g + 1] - starts[g] > 1)
+            if (starts[g + 1] - starts[g] > (between is null ? 1 : 0))
             {
                 top = Math.Max(top, 2 * lambda * centre[g]);
             }
         }
 
+        // with λ·log y_r = top/2: y^(λ) = e^{top/2}·w + constant, and in group g w = A_g·u + B_g
+        var reference = lambda == 0 ? centre[0] : 0;
         var total = 0.0;
+        var means = between is null ? null : new double[groups];
         for (var g = 0; g < groups; g++)
         {
             var n = starts[g + 1] - starts[g];
-            if (n > 1)
+            if (n == 0)
             {
-                total += Math.Exp((2 * lambda * centre[g]) - top) * CentredSquares(g, n, lambda);
+                continue;
+            }
+
+            var shift = (2 * lambda * centre[g]) - top;
+            var (sum, squares) = Sums(g, n, lambda);
+            total += n > 1 ? Math.Exp(shift) * squares : 0;
+            if (means is not null)
+            {
+                var a = Math.Exp(shift / 2);
+                var b = lambda == 0 ? centre[g] - reference : PreciseMath.ExpM1(shift / 2) / lambda;
+                means[g] = (a * sum / n) + b;
+            }
+        }
+
+        if (means is not null)
+        {
+            var residuals = new double[groups];
+            between!.Residualize(means, residuals);
+            for (var g = 0; g < groups; g++)
+            {
+                total += (starts[g + 1] - starts[g]) * residuals[g] * residuals[g];
             }
         }
 
@@ -94,8 +127,8 @@ internal sealed class GroupedPowerSums
         return ((lambda - 1) * sumLog) - (count / 2.0 * (top + Math.Log(total) - Math.Log(count)));
     }
 
-    /// <summary>Σu² − (Σu)²/n for cell g, with u = expm1(λe)/λ (e at λ = 0).</summary>
-    private double CentredSquares(int g, int n, double lambda)
+    /// <summary>Σu and Σu² − (Σu)²/n for group g, with u = expm1(λe)/λ (e at λ = 0).</summary>
+    private (double Sum, double Squares) Sums(int g, int n, double lambda)
     {
         if (Math.Abs(lambda) * reach[g] > 1)
         {
@@ -120,25 +153,25 @@ internal sealed class GroupedPowerSums
             power *= lambda;
         }
 
-        return squares - (sum * sum / n);
+        return (sum, squares - (sum * sum / n));
     }
 
-    private double Direct(int g, int n, double lambda)
+    private (double Sum, double Squares) Direct(int g, int n, double lambda)
     {
         var cell = logs.AsSpan(starts[g], n);
-        double mean = 0, squares = 0;
+        double sum = 0, squares = 0;
         foreach (var l in cell)
         {
-            mean += PreciseMath.ExpM1(lambda * (l - centre[g])) / lambda;
+            sum += PreciseMath.ExpM1(lambda * (l - centre[g])) / lambda;
         }
 
-        mean /= n;
+        var mean = sum / n;
         foreach (var l in cell)
         {
             var d = (PreciseMath.ExpM1(lambda * (l - centre[g])) / lambda) - mean;
             squares += d * d;
         }
 
-        return squares;
+        return (sum, squares);
     }
 }

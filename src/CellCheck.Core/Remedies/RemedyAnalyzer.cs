@@ -25,7 +25,7 @@ public static class RemedyAnalyzer
         var shift = request?.Shift ?? 0;
         var partition = CellPartition.Build(data.Factors, column.Values, data.Blocks);
         var y = partition.Values.Values.Select(v => column.Origin + shift + v).ToArray();
-        var rss = y.Length == 0 ? null : Model(data, spec, partition, before.Model.Info.Name == "cell-means");
+        var rss = y.Length == 0 ? null : Model(data, spec, partition, before.Model.Info);
         var model = before.Model.Info.Name;
         var nonPositive = y.Count(v => !(v > 0));
         var degenerate = rss is null || rss.ResidualDf < 1 ? RemedyReason.NoResidualDf : rss.Of(y) == 0 ? RemedyReason.ZeroSpread : null;
@@ -98,9 +98,14 @@ public static class RemedyAnalyzer
 
     /// <summary>The residual sum of squares of the declared model for the partition's rows: about the cell means for
     /// the full factorial in categorical factors without blocks, otherwise by QR of the estimable design columns.</summary>
-    private static IResidualSumOfSquares Model(DesignData data, ModelSpec spec, CellPartition partition, bool cellMeans)
+    private static IResidualSumOfSquares Model(DesignData data, ModelSpec spec, CellPartition partition, ModelInfo fitted)
     {
-        if (cellMeans || (data.Blocks.Count == 0 && spec.IsFull(data.Factors.Count) && data.Factors.All(f => !f.IsNumeric)))
+        if (fitted.Absorbed && SettingRss.Build(partition, data.Blocks) is { } settings)
+        {
+            return settings;
+        }
+
+        if (fitted.Name == "cell-means" || (data.Blocks.Count == 0 && spec.IsFull(data.Factors.Count) && data.Factors.All(f => !f.IsNumeric)))
         {
             return new GroupedRss(partition.Values.Starts);
         }

@@ -15,6 +15,9 @@ public sealed record ResidualDiagnostics(double[] Leverage, double[] Studentized
     /// <summary>The least-squares fit on the estimable columns (null for the cell-means fast path).</summary>
     public LinearFitResult? Fit { get; init; }
 
+    /// <summary>The absorbed fit of cells plus additive blocks, when that is how the model was fitted (null otherwise).</summary>
+    internal CellBlockFit? Absorbed { get; init; }
+
     /// <summary>The full-rank design matrix actually fitted: the estimable columns in order (null for cell means).</summary>
     public double[,]? Estimable { get; init; }
 }

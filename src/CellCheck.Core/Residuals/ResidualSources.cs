@@ -22,11 +22,17 @@ public static class ResidualSources
         // the QR fit holds the dense n × p design matrix; beyond DenseLimit values it would not fit in memory
         var rows = data.Responses.Count == 0 ? 0 : (double)data.Responses[0].Values.Length;
         var columns = 1.0 + data.Blocks.Sum(b => b.Levels.Count - 1.0) + spec.Terms.Sum(t => t.Factors.Aggregate(1.0, (product, f) => product * Math.Max(1, data.Factors[f].IsNumeric ? 1 : data.Factors[f].Levels.Count - 1)));
-        return rows * columns <= DenseLimit || spec.IsFull(data.Factors.Count) is false || data.Factors.Any(f => f.IsNumeric)
+        var full = spec.IsFull(data.Factors.Count) && data.Factors.All(f => !f.IsNumeric);
+        IResidualSource dense = rows * columns <= DenseLimit || !full
             ? new ModelResiduals(data.Blocks, spec, modelName)
-            : new CellMeansResiduals("The declared model (" + modelName + ") has about " + Analysis.NumberText.Count((int)Math.Min(int.MaxValue, columns)) + " columns over " + Analysis.NumberText.Count((int)rows) + " rows, too large for the dense least-squares fit; "
+            : new CellMeansResiduals("The declared model (" + modelName + ") has about " + Analysis.NumberText.Count((int)Math.Min(int.MaxValue, columns)) + " columns over " + Analysis.NumberText.Count((int)rows) + " rows, too large for the dense least-squares fit, and its blocks cannot be absorbed; "
                 + "residuals are taken about the cell means instead, so block differences stay in the residuals and the within-cell spread is overstated by them.");
+        return full && rows * columns > AbsorbLimit ? new CellBlockResiduals(data.Blocks, spec, modelName, dense) : dense;
     }
+
+    /// <summary>Above this n·p the full factorial plus blocks is fitted by absorbing the cells (<see cref="CellBlockResiduals"/>)
+    /// rather than by dense QR, whose time grows as n·p².</summary>
+    public const double AbsorbLimit = 1e6;
 
     /// <summary>Largest n·p (design matrix values, 8 bytes each) fitted by dense QR: 2·10⁸, 1.6 GB.</summary>
     public const double DenseLimit = 2e8;

@@ -1,0 +1,76 @@
+using CellCheck.Core.Models;
+
+namespace CellCheck.Core.Calibration;
+
+/// <summary>The null plan of cells plus additive blocks fitted by absorption (<see cref="CellBlockFit"/>): residuals
+/// from the reduced normal equations, studentized by the leverages of the fit.</summary>
+internal sealed class CellBlockPlan : INullPlan
+{
+    private const double LeverageOne = 1e-10;
+    private readonly CellBlockFit _fit;
+    private readonly double[] _scale;
+    private readonly int _df;
+
+    public CellBlockPlan(CellBlockFit fit, int[] cellStarts, double[] leverage, IReadOnlyList<int[]> blockCodes)
+    {
+        _fit = fit;
+        CellStarts = cellStarts;
+        Rows = leverage.Length;
+        _scale = new double[Rows];
+        for (var i = 0; i < Rows; i++)
+        {
+            _scale[i] = 1.0 - leverage[i] > LeverageOne ? Math.Sqrt(1.0 - leverage[i]) : double.NaN;
+            UsableResiduals += double.IsNaN(_scale[i]) ? 0 : 1;
+        }
+
+        _df = Rows - fit.Rank;
+        Shape = new DesignShape(Enumerable.Range(0, cellStarts.Length - 1).Select(c => cellStarts[c + 1] - cellStarts[c]));
+        var hash = 14695981039346656037UL;
+        void Mix(int value)
+        {
+            hash = unchecked((hash ^ (uint)value) * 1099511628211UL);
+        }
+
+        foreach (var start in cellStarts)
+        {
+            Mix(start);
+        }
+
+        foreach (var codes in blockCodes)
+        {
+            Mix(-1);
+            foreach (var code in codes)
+            {
+                Mix(code);
+            }
+        }
+
+        Key = "cells+blocks:" + hash.ToString("x16", System.Globalization.CultureInfo.InvariantCulture);
+    }
+
+    public string Key { get; }
+
+    public DesignShape Shape { get; }
+
+    public int Rows { get; }
+
+    public int UsableResiduals { get; }
+
+    public int[] CellStarts { get; }
+
+    public void Residualize(ReadOnlySpan<double> y, Span<double> residuals, Span<double> studentized)
+    {
+        _fit.Residualize(y, residuals);
+        var ss = 0.0;
+        foreach (var r in residuals)
+        {
+            ss += r * r;
+        }
+
+        var s = Math.Sqrt(ss / _df);
+        for (var i = 0; i < Rows; i++)
+        {
+            studentized[i] = residuals[i] / (s * _scale[i]);
+        }
+    }
+}

@@ -1,0 +1,234 @@
+using MathNet.Numerics.LinearAlgebra;
+
+namespace CellCheck.Core.Models;
+
+/// <summary>
+/// Least squares for cells plus additive blocks (y = μ_cell + Σ_j β_j(block level) + e) by absorbing the cell means:
+/// only the p block-contrast coefficients are solved for, from the p × p reduced normal equations
+/// C β = Q, C = Σ w x xᵀ − Σ_c n_c x̄_c x̄_cᵀ, Q = Σ w x (y − ȳ_c), where x holds a unit's treatment-contrast block
+/// indicators and x̄_c, ȳ_c are cell means (Searle 1971, Linear Models, §7.2, "absorbing" one factor; the fit is
+/// that of the full dummy-variable regression). Units are rows, or groups of rows with weights (their counts).
+/// Time O(n·B + cells·p + p³) and no n × p matrix, so ten million rows with thousands of cells fit in seconds.
+/// </summary>
+internal sealed class CellBlockFit
+{
+    private readonly int[] starts;
+    private readonly int[][] dummy;
+    private readonly double[]? weights;
+    private readonly double[] cellWeight;
+    private readonly double[] cellMeanX;
+    private readonly double[,] inverse;
+    private readonly double[] cellQuadratic;
+    private readonly double[] cellProjected;
+
+    private CellBlockFit(int[] starts, int[][] dummy, double[]? weights, int p, double[] cellWeight, double[] cellMeanX, double[,] inverse)
+    {
+        this.starts = starts;
+        this.dummy = dummy;
+        this.weights = weights;
+        this.cellWeight = cellWeight;
+        this.cellMeanX = cellMeanX;
+        this.inverse = inverse;
+        P = p;
+        var cells = starts.Length - 1;
+        cellProjected = new double[cells * p];
+        cellQuadratic = new double[cells];
+        for (var c = 0; c < cells; c++)
+        {
+            for (var a = 0; a < p; a++)
+            {
+                var sum = 0.0;
+                for (var b = 0; b < p; b++)
+                {
+                    sum += inverse[a, b] * cellMeanX[(c * p) + b];
+                }
+
+                cellProjected[(c * p) + a] = sum;
+                cellQuadratic[c] += cellMeanX[(c * p) + a] * sum;
+            }
+        }
+    }
+
+    /// <summary>Per block factor, the block-contrast column of each unit (−1 for the factor's first level).</summary>
+    public int[][] Dummy => dummy;
+
+    /// <summary>Number of block-contrast columns.</summary>
+    public int P { get; }
+
+    /// <summary>Number of cells holding at least one unit.</summary>
+    public int Cells => cellWeight.Count(w => w > 0);
+
+    /// <summary>Cells plus block contrasts: the rank of the fit.</summary>
+    public int Rank => Cells + P;
+
+    /// <summary>Sets up the fit, or returns null when the block contrasts are not all estimable apart from the cells
+    /// (C singular: a block confounded with cells), which the caller leaves to a pivoted QR fit.</summary>
+    /// <param name="starts">Units of cell c are starts[c] .. starts[c + 1] − 1.</param>
+    /// <param name="blockCodes">Per block factor, the level code of each unit (all non-negative).</param>
+    /// <param name="weights">Unit weights (group sizes), or null for one row per unit.</param>
+    public static CellBlockFit? Build(int[] starts, IReadOnlyList<int[]> blockCodes, double[]? weights = null)
+    {
+        var units = starts[^1];
+        var dummy = new int[blockCodes.Count][];
+        var p = 0;
+        for (var j = 0; j < blockCodes.Count; j++)
+        {
+            var codes = blockCodes[j];
+            var present = new SortedSet<int>();
+            foreach (var code in codes)
+            {
+                present.Add(code);
+            }
+
+            var index = new Dictionary<int, int>();
+            foreach (var code in present.Skip(1))
+            {
+                index[code] = p++;
+            }
+
+            dummy[j] = new int[units];
+            for (var i = 0; i < units; i++)
+            {
+                dummy[j][i] = index.TryGetValue(codes[i], out var k) ? k : -1;
+            }
+        }
+
+        var cells = starts.Length - 1;
+        var cellWeight = new double[cells];
+        var cellMeanX = new double[cells * p];
+        var c2 = new double[p, p];
+        for (var c = 0; c < cells; c++)
+        {
+            for (var i = starts[c]; i < starts[c + 1]; i++)
+            {
+                var w = weights?[i] ?? 1.0;
+                cellWeight[c] += w;
+                for (var j = 0; j < dummy.Length; j++)
+                {
+                    var a = dummy[j][i];
+                    if (a < 0)
+                    {
+                        continue;
+                    }
+
+                    cellMeanX[(c * p) + a] += w;
+                    for (var k = 0; k < dummy.Length; k++)
+                    {
+                        var b = dummy[k][i];
+                        if (b >= 0)
+                        {
+                            c2[a, b] += w;
+                        }
+                    }
+                }
+            }
+
+            for (var a = 0; a < p && cellWeight[c] > 0; a++)
+            {
+                cellMeanX[(c * p) + a] /= cellWeight[c];
+            }
+
+            for (var a = 0; a < p; a++)
+            {
+                for (var b = 0; b < p; b++)
+                {
+                    c2[a, b] -= cellWeight[c] * cellMeanX[(c * p) + a] * cellMeanX[(c * p) + b];
+                }
+            }
+        }
+
+        if (p == 0)
+        {
+            return new CellBlockFit(starts, dummy, weights, 0, cellWeight, cellMeanX, new double[0, 0]);
+        }
+
+        var matrix = Matrix<double>.Build.DenseOfArray(c2);
+        var eigen = matrix.Evd(Symmetricity.Symmetric).EigenValues.Select(v => v.Real).ToArray();
+        if (!(eigen.Min() > 1e-9 * Math.Max(1.0, eigen.Max())))
+        {
+            return null;
+        }
+
+        return new CellBlockFit(starts, dummy, weights, p, cellWeight, cellMeanX, matrix.Inverse().ToArray());
+    }
+
+    /// <summary>Residuals of <paramref name="y"/> (one value per unit, in unit order) on cells plus blocks.</summary>
+    public void Residualize(ReadOnlySpan<double> y, Span<double> residuals)
+    {
+        var cells = starts.Length - 1;
+        var q = new double[P];
+        var means = new double[cells];
+        for (var c = 0; c < cells; c++)
+        {
+            double sum = 0;
+            for (var i = starts[c]; i < starts[c + 1]; i++)
+            {
+                sum += (weights?[i] ?? 1.0) * y[i];
+            }
+
+            means[c] = cellWeight[c] > 0 ? sum / cellWeight[c] : 0;
+            for (var i = starts[c]; i < starts[c + 1]; i++)
+            {
+                var d = (weights?[i] ?? 1.0) * (y[i] - means[c]);
+                foreach (var column in dummy)
+                {
+                    if (column[i] >= 0)
+                    {
+                        q[column[i]] += d;
+                    }
+                }
+            }
+        }
+
+        var beta = new double[P];
+        for (var a = 0; a < P; a++)
+        {
+            for (var b = 0; b < P; b++)
+            {
+                beta[a] += inverse[a, b] * q[b];
+            }
+        }
+
+        for (var c = 0; c < cells; c++)
+        {
+            var centre = 0.0;
+            for (var a = 0; a < P; a++)
+            {
+                centre += cellMeanX[(c * P) + a] * beta[a];
+            }
+
+            for (var i = starts[c]; i < starts[c + 1]; i++)
+            {
+                var effect = -centre;
+                foreach (var column in dummy)
+                {
+                    effect += column[i] >= 0 ? beta[column[i]] : 0;
+                }
+
+                residuals[i] = y[i] - means[c] - effect;
+            }
+        }
+    }
+
+    /// <summary>Leverage of unit i of cell c (for weighted units, of one row of the unit).</summary>
+    public double Leverage(int c, int i)
+    {
+        var h = (1.0 / cellWeight[c]) + cellQuadratic[c];
+        foreach (var column in dummy)
+        {
+            var a = column[i];
+            if (a < 0)
+            {
+                continue;
+            }
+
+            h -= 2 * cellProjected[(c * P) + a];
+            foreach (var other in dummy)
+            {
+                h += other[i] >= 0 ? inverse[a, other[i]] : 0;
+            }
+        }
+
+        return h;
+    }
+}

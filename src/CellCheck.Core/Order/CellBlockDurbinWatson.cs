@@ -1,0 +1,178 @@
+using CellCheck.Core.Statistics;
+using MathNet.Numerics.LinearAlgebra;
+
+namespace CellCheck.Core.Order;
+
+/// <summary>
+/// The Durbin-Watson test for residuals of cells plus additive blocks (the absorbed fit), with the exact null mean and
+/// variance of d from traces that never form the n × p design matrix, and the normal approximation for p (as
+/// <see cref="DurbinWatson"/> above its exact limit).
+/// </summary>
+/// <remarks>
+/// With M_c the residual projector of the cell indicators and Z = M_c X_b the cell-centred block contrasts,
+/// M = M_c − Z C⁻¹ Zᵀ with C = ZᵀZ. Writing G = ZᵀAZ and K = ZᵀA M_c A Z (p × p, accumulated row by row in run
+/// order), tr(MA) = tr(M_cA) − tr(C⁻¹G) and tr((MA)²) = tr((M_cA)²) − 2 tr(C⁻¹K) + tr((C⁻¹G)²), with the cell traces
+/// from <see cref="GroupedDurbinWatson"/>. Time O(n·p²), memory O(cells·p).
+/// </remarks>
+public static class CellBlockDurbinWatson
+{
+    /// <param name="residuals">Residuals of the fit, in run order.</param>
+    /// <param name="cell">The cell of each residual, in run order.</param>
+    /// <param name="dummy">Per block factor, the block-contrast column (0 .. p − 1) of each residual in run order, or −1 for the first level.</param>
+    /// <returns>Null when the block contrasts are not estimable apart from the cells over these rows.</returns>
+    public static DurbinWatsonResult? Test(ReadOnlySpan<double> residuals, int[] cell, int cells, IReadOnlyList<int[]> dummy, int p,
+        DurbinWatsonAlternative alternative = DurbinWatsonAlternative.Positive)
+    {
+        var n = residuals.Length;
+        var (traceCell, traceCell2, groups) = GroupedDurbinWatson.Traces(cell, cells);
+        var size = new double[cells];
+        var mean = new double[cells * p];
+        var c = new double[p, p];
+        for (var t = 0; t < n; t++)
+        {
+            size[cell[t]]++;
+            foreach (var column in dummy)
+            {
+                if (column[t] < 0)
+                {
+                    continue;
+                }
+
+                mean[(cell[t] * p) + column[t]]++;
+                foreach (var other in dummy)
+                {
+                    if (other[t] >= 0)
+                    {
+                        c[column[t], other[t]]++;
+                    }
+                }
+            }
+        }
+
+        for (var g = 0; g < cells; g++)
+        {
+            for (var a = 0; a < p && size[g] > 0; a++)
+            {
+                mean[(g * p) + a] /= size[g];
+            }
+
+            for (var a = 0; a < p; a++)
+            {
+                for (var b = 0; b < p; b++)
+                {
+                    c[a, b] -= size[g] * mean[(g * p) + a] * mean[(g * p) + b];
+                }
+            }
+        }
+
+        var cm = Matrix<double>.Build.DenseOfArray(c);
+        var eigen = cm.Evd(Symmetricity.Symmetric).EigenValues.Select(v => v.Real).ToArray();
+        var rank = groups + p;
+        if (n < rank + 2 || !(eigen.Min() > 1e-9 * Math.Max(1.0, eigen.Max())))
+        {
+            return null;
+        }
+
+        var (gMatrix, kMatrix) = Accumulate(cell, cells, dummy, p, mean, size);
+        var inverse = cm.Inverse();
+        var cg = inverse * Matrix<double>.Build.DenseOfArray(gMatrix);
+        var traceMA = traceCell - cg.Trace();
+        var traceMA2 = traceCell2 - (2 * (inverse * Matrix<double>.Build.DenseOfArray(kMatrix)).Trace()) + (cg * cg).Trace();
+        var nu = (double)(n - rank);
+        var expected = traceMA / nu;
+        var variance = GroupedDurbinWatson.Variance(traceMA, traceMA2, nu);
+        var d = DurbinWatson.Statistic(residuals);
+        if (double.IsNaN(d))
+        {
+            return new DurbinWatsonResult(d, double.NaN, expected, variance, OrderMethods.None, alternative, NotTestableReason.ZeroSpread);
+        }
+
+        var z = (d - expected) / Math.Sqrt(variance);
+        var pValue = alternative switch
+        {
+            DurbinWatsonAlternative.Positive => StandardNormal.Cdf(z),
+            DurbinWatsonAlternative.Negative => StandardNormal.UpperTail(z),
+            _ => Math.Min(1.0, 2.0 * Math.Min(StandardNormal.Cdf(z), StandardNormal.UpperTail(z))),
+        };
+        return new DurbinWatsonResult(d, pValue, expected, variance, OrderMethods.NormalApproximation, alternative);
+    }
+
+    /// <summary>G = ZᵀAZ = Σ (z_t − z_{t−1})(z_t − z_{t−1})ᵀ and K = WᵀM_cW with W = AZ, over the run sequence.</summary>
+    private static (double[,] G, double[,] K) Accumulate(int[] cell, int cells, IReadOnlyList<int[]> dummy, int p, double[] mean, double[] size)
+    {
+        var n = cell.Length;
+        var g = new double[p, p];
+        var ww = new double[p, p];
+        var cellW = new double[cells * p];
+        var previous = new double[p];
+        var current = new double[p];
+        var next = new double[p];
+        var d = new double[p];
+        var w = new double[p];
+        Centred(0, cell, dummy, p, mean, current);
+        for (var t = 0; t < n; t++)
+        {
+            if (t + 1 < n)
+            {
+                Centred(t + 1, cell, dummy, p, mean, next);
+            }
+
+            var degree = (t > 0 ? 1 : 0) + (t + 1 < n ? 1 : 0);
+            for (var a = 0; a < p; a++)
+            {
+                d[a] = current[a] - previous[a];
+                w[a] = (degree * current[a]) - (t > 0 ? previous[a] : 0) - (t + 1 < n ? next[a] : 0);
+                cellW[(cell[t] * p) + a] += w[a];
+            }
+
+            for (var a = 0; a < p; a++)
+            {
+                for (var b = a; b < p; b++)
+                {
+                    if (t > 0)
+                    {
+                        g[a, b] += d[a] * d[b];
+                    }
+
+                    ww[a, b] += w[a] * w[b];
+                }
+            }
+
+            (previous, current, next) = (current, next, previous);
+        }
+
+        var k = new double[p, p];
+        for (var a = 0; a < p; a++)
+        {
+            for (var b = a; b < p; b++)
+            {
+                var between = 0.0;
+                for (var c = 0; c < cells; c++)
+                {
+                    between += size[c] > 0 ? cellW[(c * p) + a] * cellW[(c * p) + b] / size[c] : 0;
+                }
+
+                k[a, b] = k[b, a] = ww[a, b] - between;
+                g[b, a] = g[a, b];
+            }
+        }
+
+        return (g, k);
+    }
+
+    private static void Centred(int t, int[] cell, IReadOnlyList<int[]> dummy, int p, double[] mean, double[] z)
+    {
+        for (var a = 0; a < p; a++)
+        {
+            z[a] = -mean[(cell[t] * p) + a];
+        }
+
+        foreach (var column in dummy)
+        {
+            if (column[t] >= 0)
+            {
+                z[column[t]] += 1;
+            }
+        }
+    }
+}

@@ -1,0 +1,115 @@
+using CellCheck.Core.Cells;
+using CellCheck.Core.Data;
+using CellCheck.Core.Models;
+
+namespace CellCheck.Core.Remedies;
+
+/// <summary>
+/// Residual sum of squares on cells plus additive blocks, organised by identical settings (a cell within a block):
+/// within-setting sums of squares plus the weighted fit of the setting means (<see cref="CellBlockFit"/>). The
+/// Box-Cox profile uses the same organisation with power sums (<see cref="GroupedPowerSums"/>).
+/// </summary>
+internal sealed class SettingRss : IResidualSumOfSquares
+{
+    private SettingRss(int[] permutation, int[] starts, CellBlockFit between, int residualDf)
+    {
+        Permutation = permutation;
+        Starts = starts;
+        Between = between;
+        ResidualDf = residualDf;
+    }
+
+    /// <summary>Positions (in the partition's grouped order) sorted by setting.</summary>
+    public int[] Permutation { get; }
+
+    /// <summary>Setting g holds Permutation[Starts[g] .. Starts[g + 1] − 1].</summary>
+    public int[] Starts { get; }
+
+    /// <summary>The weighted fit of the model to setting means.</summary>
+    public CellBlockFit Between { get; }
+
+    public int Count => Permutation.Length;
+
+    public int ResidualDf { get; }
+
+    /// <summary>The organisation for a partition, or null when the blocks cannot be absorbed.</summary>
+    public static SettingRss? Build(CellPartition partition, IReadOnlyList<FactorColumn> blocks)
+    {
+        var (settings, count) = SettingGroups.Of(partition, blocks);
+        var starts = new int[count + 1];
+        foreach (var g in settings)
+        {
+            starts[g + 1]++;
+        }
+
+        for (var g = 0; g < count; g++)
+        {
+            starts[g + 1] += starts[g];
+        }
+
+        var permutation = new int[settings.Length];
+        var next = (int[])starts.Clone();
+        for (var i = 0; i < settings.Length; i++)
+        {
+            permutation[next[settings[i]]++] = i;
+        }
+
+        // settings are numbered cell by cell, so each cell's settings are contiguous
+        var cellStarts = new int[partition.CellCount + 1];
+        var weights = new double[count];
+        var codes = blocks.Select(_ => new int[count]).ToArray();
+        for (var c = 0; c < partition.CellCount; c++)
+        {
+            cellStarts[c + 1] = cellStarts[c];
+            for (var i = partition.Values.Starts[c]; i < partition.Values.Starts[c + 1]; i++)
+            {
+                cellStarts[c + 1] = Math.Max(cellStarts[c + 1], settings[i] + 1);
+            }
+        }
+
+        for (var g = 0; g < count; g++)
+        {
+            weights[g] = starts[g + 1] - starts[g];
+            var row = partition.RowOrder[permutation[starts[g]]];
+            for (var j = 0; j < blocks.Count; j++)
+            {
+                codes[j][g] = blocks[j].Codes[row];
+            }
+        }
+
+        var between = CellBlockFit.Build(cellStarts, codes, weights);
+        return between is null ? null : new SettingRss(permutation, starts, between, settings.Length - between.Rank);
+    }
+
+    public double Of(ReadOnlySpan<double> v)
+    {
+        var groups = Starts.Length - 1;
+        var means = new double[groups];
+        var total = 0.0;
+        for (var g = 0; g < groups; g++)
+        {
+            var n = Starts[g + 1] - Starts[g];
+            var sum = 0.0;
+            for (var k = Starts[g]; k < Starts[g + 1]; k++)
+            {
+                sum += v[Permutation[k]];
+            }
+
+            means[g] = sum / n;
+            for (var k = Starts[g]; k < Starts[g + 1]; k++)
+            {
+                var d = v[Permutation[k]] - means[g];
+                total += d * d;
+            }
+        }
+
+        var residuals = new double[groups];
+        Between.Residualize(means, residuals);
+        for (var g = 0; g < groups; g++)
+        {
+            total += (Starts[g + 1] - Starts[g]) * residuals[g] * residuals[g];
+        }
+
+        return total;
+    }
+}

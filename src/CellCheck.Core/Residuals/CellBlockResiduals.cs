@@ -1,0 +1,73 @@
+using CellCheck.Core.Calibration;
+using CellCheck.Core.Cells;
+using CellCheck.Core.Data;
+using CellCheck.Core.Models;
+
+namespace CellCheck.Core.Residuals;
+
+/// <summary>
+/// The default blocked model, every cell of the full factorial in categorical factors plus additive blocks, fitted by
+/// absorbing the cell means (<see cref="CellBlockFit"/>): the same least-squares fit as the dummy-variable regression,
+/// without its n × p matrix. Used for large designs; when the blocks are confounded with the cells, or a cell of the
+/// factorial is empty, the pivoted QR fit of <see cref="ModelResiduals"/> decides what is aliased instead.
+/// </summary>
+public sealed class CellBlockResiduals(IReadOnlyList<FactorColumn> blocks, ModelSpec spec, string name, IResidualSource fallback) : IResidualSource
+{
+    public string Name => name;
+
+    public ResidualSet Compute(CellPartition partition)
+    {
+        ArgumentNullException.ThrowIfNull(partition);
+        var complete = partition.Factors.Aggregate(1L, (product, f) => product * f.Levels.Count) == partition.CellCount;
+        var codes = blocks.Select(b => Gather(partition.RowOrder, b.Codes)).ToArray();
+        var fit = complete && partition.RowOrder.Length > 0 && codes.All(c => c.All(v => v >= 0))
+            ? CellBlockFit.Build(partition.Values.Starts, codes)
+            : null;
+        if (fit is null)
+        {
+            return fallback.Compute(partition);
+        }
+
+        var y = partition.Values.Values;
+        var n = y.Length;
+        var residuals = new double[n];
+        fit.Residualize(y, residuals);
+        var fitted = new double[n];
+        var leverage = new double[n];
+        var rss = 0.0;
+        for (var c = 0; c < partition.CellCount; c++)
+        {
+            for (var i = partition.Values.Starts[c]; i < partition.Values.Starts[c + 1]; i++)
+            {
+                fitted[i] = y[i] - residuals[i];
+                leverage[i] = fit.Leverage(c, i);
+                rss += residuals[i] * residuals[i];
+            }
+        }
+
+        var df = n - fit.Rank;
+        var studentized = new double[n];
+        var external = new double[n];
+        var cooks = new double[n];
+        CaseDiagnostics.Compute(residuals, leverage, rss, df, fit.Rank, studentized, external, cooks);
+        var s = df > 0 ? Math.Sqrt(rss / df) : double.NaN;
+        var terms = spec.Terms.Select(t => t.Name(partition.Factors)).Concat(blocks.Select(b => b.Name)).ToArray();
+        var info = new ModelInfo(name, terms, fit.Rank, fit.Rank, df, [], []) { Absorbed = true };
+        var plan = new CellBlockPlan(fit, partition.Values.Starts, leverage, codes);
+        return new ResidualSet(name, residuals, fitted, studentized, s, df, plan)
+        {
+            Diagnostics = new ResidualDiagnostics(leverage, external, cooks, info) { Absorbed = fit },
+        };
+    }
+
+    private static int[] Gather(int[] order, int[] codes)
+    {
+        var result = new int[order.Length];
+        for (var i = 0; i < order.Length; i++)
+        {
+            result[i] = codes[order[i]];
+        }
+
+        return result;
+    }
+}

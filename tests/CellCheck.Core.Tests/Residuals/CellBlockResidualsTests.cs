@@ -1,0 +1,135 @@
+using CellCheck.Core.Cells;
+using CellCheck.Core.Data;
+using CellCheck.Core.Models;
+using CellCheck.Core.Order;
+using CellCheck.Core.Remedies;
+using CellCheck.Core.Residuals;
+
+namespace CellCheck.Core.Tests.Residuals;
+
+/// <summary>
+/// The absorbed fit of cells plus additive blocks against the dense pivoted-QR fit of the same model (itself checked
+/// against R's lm in the model tests), on unbalanced designs with one and two block factors. Tolerance 1e-9 relative
+/// (1e-9 absolute on residuals of unit scale): both solve the same least-squares problem in double precision, the QR
+/// with refinement, the absorption through a small well-conditioned p × p system.
+/// </summary>
+public sealed class CellBlockResidualsTests
+{
+    private static (CellPartition Partition, FactorColumn[] Blocks, ModelSpec Spec, double[] Order) Design(int seed, int blockFactors)
+    {
+        var random = new Random(seed);
+        const int n = 420;
+        var a = new int[n];
+        var b = new int[n];
+        var blockCodes = Enumerable.Range(0, blockFactors).Select(_ => new int[n]).ToArray();
+        var y = new double[n];
+        for (var i = 0; i < n; i++)
+        {
+            a[i] = i < 12 ? i % 3 : random.Next(3);
+            b[i] = i < 12 ? i / 3 : random.Next(4);
+            for (var j = 0; j < blockFactors; j++)
+            {
+                blockCodes[j][i] = i < 12 ? i % (5 + j) : random.Next(5 + j);
+            }
+
+            y[i] = 50 + (3 * a[i]) - b[i] + (0.2 * a[i] * b[i]) + (blockFactors > 0 ? 1.5 * blockCodes[0][i] : 0) + Math.Exp(0.3 * random.NextDouble()) + random.NextDouble();
+        }
+
+        var factors = new[]
+        {
+            new FactorColumn("a", ["a1", "a2", "a3"], a),
+            new FactorColumn("b", ["b1", "b2", "b3", "b4"], b),
+        };
+        var blocks = blockCodes.Select((codes, j) => new FactorColumn("block" + j, Enumerable.Range(0, 5 + j).Select(k => "k" + k).ToArray(), codes)).ToArray();
+        var order = Enumerable.Range(0, n).Select(i => (double)i).ToArray();
+        random.Shuffle(order);
+        return (CellPartition.Build(factors, y, blocks), blocks, ModelSpec.Full(2), order);
+    }
+
+    [Theory]
+    [InlineData(1, 1)]
+    [InlineData(2, 2)]
+    public void Residuals_leverage_and_studentized_residuals_equal_the_dense_fit(int seed, int blockFactors)
+    {
+        var (partition, blocks, spec, _) = Design(seed, blockFactors);
+        var dense = new ModelResiduals(blocks, spec, "m").Compute(partition);
+        var absorbed = new CellBlockResiduals(blocks, spec, "m", new ModelResiduals(blocks, spec, "m")).Compute(partition);
+        Assert.True(absorbed.Diagnostics!.Model.Absorbed);
+        Assert.Equal(dense.ResidualDf, absorbed.ResidualDf);
+        Assert.Equal(dense.ResidualSd, absorbed.ResidualSd, 1e-9 * dense.ResidualSd);
+        for (var i = 0; i < dense.Residuals.Length; i++)
+        {
+            Assert.Equal(dense.Residuals[i], absorbed.Residuals[i], 1e-9);
+            Assert.Equal(dense.Diagnostics!.Leverage[i], absorbed.Diagnostics.Leverage[i], 1e-9);
+            Assert.Equal(dense.Studentized[i], absorbed.Studentized[i], 1e-8);
+            Assert.Equal(dense.Diagnostics.CooksDistance[i], absorbed.Diagnostics.CooksDistance[i], 1e-9);
+        }
+    }
+
+    [Fact]
+    public void Tukeys_test_and_lack_of_fit_equal_the_dense_fit()
+    {
+        var (partition, blocks, spec, _) = Design(3, 1);
+        var dense = new ModelResiduals(blocks, spec, "m").Compute(partition);
+        var absorbed = new CellBlockResiduals(blocks, spec, "m", new ModelResiduals(blocks, spec, "m")).Compute(partition);
+        var denseTukey = TukeyNonadditivity.Test(dense.Diagnostics!.Estimable!, dense.Diagnostics.Fit!);
+        var rss = absorbed.ResidualSd * absorbed.ResidualSd * absorbed.ResidualDf;
+        var tukey = TukeyNonadditivity.Test(absorbed.Residuals, absorbed.Fitted, rss, absorbed.ResidualDf, absorbed.Diagnostics!.Absorbed!);
+        Assert.Equal(denseTukey.Statistic, tukey.Statistic, 1e-9 * denseTukey.Statistic);
+        Assert.Equal(denseTukey.P, tukey.P, 1e-9);
+        var (settings, _) = SettingGroups.Of(partition, blocks);
+        var denseLack = LackOfFit.Test(dense.Diagnostics.Fit!, partition.Values.Values, settings);
+        var lack = LackOfFit.Test(absorbed.ResidualDf, rss, partition.Values.Values, settings);
+        Assert.Equal(denseLack.Statistic, lack.Statistic, 1e-9 * denseLack.Statistic);
+    }
+
+    [Theory]
+    [InlineData(4, 1)]
+    [InlineData(5, 2)]
+    public void Durbin_Watson_moments_equal_the_dense_trace_computation(int seed, int blockFactors)
+    {
+        var (partition, blocks, spec, order) = Design(seed, blockFactors);
+        var absorbed = new CellBlockResiduals(blocks, spec, "m", new ModelResiduals(blocks, spec, "m")).Compute(partition);
+        var dense = new ModelResiduals(blocks, spec, "m").Compute(partition);
+        var run = Enumerable.Range(0, partition.RowOrder.Length).OrderBy(i => order[partition.RowOrder[i]]).ToArray();
+        var e = run.Select(i => absorbed.Residuals[i]).ToArray();
+        var estimable = dense.Diagnostics!.Estimable!;
+        var x = new double[run.Length, estimable.GetLength(1)];
+        for (var k = 0; k < run.Length; k++)
+        {
+            for (var j = 0; j < x.GetLength(1); j++)
+            {
+                x[k, j] = estimable[run[k], j];
+            }
+        }
+
+        var expected = DurbinWatson.Test(e, x, DurbinWatsonAlternative.Positive, exactLimit: 0);
+        var cells = partition.CellOfGroupedIndex();
+        var fit = absorbed.Diagnostics!.Absorbed!;
+        var actual = CellBlockDurbinWatson.Test(e, run.Select(i => cells[i]).ToArray(), partition.CellCount,
+            fit.Dummy.Select(d => run.Select(i => d[i]).ToArray()).ToArray(), fit.P)!;
+        Assert.Equal(expected.ExpectedD, actual.ExpectedD, 1e-9 * expected.ExpectedD);
+        Assert.Equal(expected.VarianceD, actual.VarianceD, 1e-9 * expected.VarianceD);
+        Assert.Equal(expected.P, actual.P, 1e-9);
+    }
+
+    [Fact]
+    public void The_Box_Cox_profile_by_settings_equals_the_dense_profile()
+    {
+        var (partition, blocks, spec, _) = Design(6, 1);
+        var dense = new ModelResiduals(blocks, spec, "m").Compute(partition);
+        var settings = SettingRss.Build(partition, blocks)!;
+        var y = partition.Values.Values;
+        var logs = y.Select(v => Math.Log(v)).ToArray();
+        var sums = new GroupedPowerSums(settings.Starts, Array.ConvertAll(settings.Permutation, i => logs[i]), settings.Between);
+        Assert.Equal(dense.ResidualDf, settings.ResidualDf);
+        foreach (var lambda in new[] { -2.0, -0.5, 0.0, 0.3, 1.0, 2.5 })
+        {
+            var expected = BoxCox.LogLikelihood(dense.Diagnostics!.Estimable!, y, lambda);
+            Assert.Equal(expected, sums.LogLikelihood(lambda), Math.Abs(expected) * 1e-10);
+        }
+
+        var rss = dense.ResidualSd * dense.ResidualSd * dense.ResidualDf;
+        Assert.Equal(rss, settings.Of(y), rss * 1e-9);
+    }
+}

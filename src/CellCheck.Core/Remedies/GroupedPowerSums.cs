@@ -27,6 +27,9 @@ internal sealed class GroupedPowerSums
     /// <summary>Series terms summed per cell.</summary>
     public const int Terms = 30;
 
+    /// <summary>Groups per parallel work item.</summary>
+    private const int Chunk = 2048;
+
     private readonly int[] starts;
     private readonly double[] logs;
     private readonly double[] centre;
@@ -74,6 +77,14 @@ internal sealed class GroupedPowerSums
                     power *= e;
                 }
             }
+
+            // stored as S_k / k!
+            var factorial = 1.0;
+            for (var k = 1; k <= Terms; k++)
+            {
+                factorial *= k;
+                s[k] /= factorial;
+            }
         }
     }
 
@@ -92,25 +103,34 @@ internal sealed class GroupedPowerSums
 
         // with λ·log y_r = top/2: y^(λ) = e^{top/2}·w + constant, and in group g w = A_g·u + B_g
         var reference = lambda == 0 ? centre[0] : 0;
-        var total = 0.0;
+        var within = new double[groups];
         var means = between is null ? null : new double[groups];
-        for (var g = 0; g < groups; g++)
+        // groups are independent: evaluated in parallel, each into its own slot, then summed in order (deterministic)
+        Parallel.For(0, (groups + Chunk - 1) / Chunk, chunk =>
         {
-            var n = starts[g + 1] - starts[g];
-            if (n == 0)
+            for (var g = chunk * Chunk; g < Math.Min(groups, (chunk + 1) * Chunk); g++)
             {
-                continue;
-            }
+                var n = starts[g + 1] - starts[g];
+                if (n == 0)
+                {
+                    continue;
+                }
 
-            var shift = (2 * lambda * centre[g]) - top;
-            var (sum, squares) = Sums(g, n, lambda);
-            total += n > 1 ? Math.Exp(shift) * squares : 0;
-            if (means is not null)
-            {
-                var a = Math.Exp(shift / 2);
-                var b = lambda == 0 ? centre[g] - reference : PreciseMath.ExpM1(shift / 2) / lambda;
-                means[g] = (a * sum / n) + b;
+                var shift = (2 * lambda * centre[g]) - top;
+                var (sum, squares) = Sums(g, n, lambda);
+                within[g] = n > 1 ? Math.Exp(shift) * squares : 0;
+                if (means is not null)
+                {
+                    var a = Math.Exp(shift / 2);
+                    var b = lambda == 0 ? centre[g] - reference : PreciseMath.ExpM1(shift / 2) / lambda;
+                    means[g] = (a * sum / n) + b;
+                }
             }
+        });
+        var total = 0.0;
+        foreach (var part in within)
+        {
+            total += part;
         }
 
         if (means is not null)
@@ -136,17 +156,26 @@ internal sealed class GroupedPowerSums
         }
 
         var s = sums.AsSpan(g * (Terms + 1), Terms + 1);
-        double sum = 0, squares = 0, factorial = 1, twoPower = 1;
+        double sum = 0, squares = 0, twoPower = 1;
         double previous = 0, power = 1; // power = λ^(k−1), previous = λ^(k−2)
+        // bound on the k-th squared-series term relative to the sum of squares (which is at least reach²):
+        // 4n·x^(k−2)/k! with x = 2|λ|·reach ≤ 2; stop once it is far below rounding
+        var x = 2 * Math.Abs(lambda) * reach[g];
+        var bound = 2.0 * n;
         for (var k = 1; k <= Terms; k++)
         {
-            factorial *= k;
             twoPower *= 2;
-            var term = s[k] / factorial;
+            var term = s[k];
             sum += power * term;
             if (k >= 2)
             {
                 squares += (twoPower - 2) * previous * term;
+                if (bound < 1e-18)
+                {
+                    break;
+                }
+
+                bound *= x / (k + 1);
             }
 
             previous = power;

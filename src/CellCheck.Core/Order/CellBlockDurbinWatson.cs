@@ -97,20 +97,61 @@ public static class CellBlockDurbinWatson
         return new DurbinWatsonResult(d, pValue, expected, variance, OrderMethods.NormalApproximation, alternative);
     }
 
-    /// <summary>G = ZᵀAZ = Σ (z_t − z_{t−1})(z_t − z_{t−1})ᵀ and K = WᵀM_cW with W = AZ, over the run sequence.</summary>
+    /// <summary>G = ZᵀAZ = Σ (z_t − z_{t−1})(z_t − z_{t−1})ᵀ and K = WᵀM_cW with W = AZ, over the run sequence
+    /// (two halves of the sequence accumulated in parallel, then added in a fixed order).</summary>
     private static (double[,] G, double[,] K) Accumulate(int[] cell, int cells, IReadOnlyList<int[]> dummy, int p, double[] mean, double[] size)
     {
         var n = cell.Length;
+        var halves = new (double[] G, double[] WW, double[] CellW)[2];
+        Parallel.For(0, 2, h => halves[h] = Range(cell, cells, dummy, p, mean, h * n / 2, (h + 1) * n / 2));
         var g = new double[p, p];
-        var ww = new double[p, p];
+        var k = new double[p, p];
+        var cellW = halves[0].CellW;
+        for (var i = 0; i < cellW.Length; i++)
+        {
+            cellW[i] += halves[1].CellW[i];
+        }
+
+        for (var a = 0; a < p; a++)
+        {
+            for (var b = 0; b < p; b++)
+            {
+                var between = 0.0;
+                for (var c = 0; c < cells; c++)
+                {
+                    between += size[c] > 0 ? cellW[(c * p) + a] * cellW[(c * p) + b] / size[c] : 0;
+                }
+
+                g[a, b] = halves[0].G[(a * p) + b] + halves[1].G[(a * p) + b];
+                k[a, b] = halves[0].WW[(a * p) + b] + halves[1].WW[(a * p) + b] - between;
+            }
+        }
+
+        return (g, k);
+    }
+
+    private static (double[] G, double[] WW, double[] CellW) Range(int[] cell, int cells, IReadOnlyList<int[]> dummy, int p, double[] mean, int from, int to)
+    {
+        var n = cell.Length;
+        var g = new double[p * p];
+        var ww = new double[p * p];
         var cellW = new double[cells * p];
         var previous = new double[p];
         var current = new double[p];
         var next = new double[p];
         var d = new double[p];
         var w = new double[p];
-        Centred(0, cell, dummy, p, mean, current);
-        for (var t = 0; t < n; t++)
+        if (from > 0)
+        {
+            Centred(from - 1, cell, dummy, p, mean, previous);
+        }
+
+        if (from < to)
+        {
+            Centred(from, cell, dummy, p, mean, current);
+        }
+
+        for (var t = from; t < to; t++)
         {
             if (t + 1 < n)
             {
@@ -127,37 +168,18 @@ public static class CellBlockDurbinWatson
 
             for (var a = 0; a < p; a++)
             {
-                for (var b = a; b < p; b++)
+                if (t > 0)
                 {
-                    if (t > 0)
-                    {
-                        g[a, b] += d[a] * d[b];
-                    }
-
-                    ww[a, b] += w[a] * w[b];
+                    VectorKernels.AddScaled(g.AsSpan(a * p, p), d[a], d);
                 }
+
+                VectorKernels.AddScaled(ww.AsSpan(a * p, p), w[a], w);
             }
 
             (previous, current, next) = (current, next, previous);
         }
 
-        var k = new double[p, p];
-        for (var a = 0; a < p; a++)
-        {
-            for (var b = a; b < p; b++)
-            {
-                var between = 0.0;
-                for (var c = 0; c < cells; c++)
-                {
-                    between += size[c] > 0 ? cellW[(c * p) + a] * cellW[(c * p) + b] / size[c] : 0;
-                }
-
-                k[a, b] = k[b, a] = ww[a, b] - between;
-                g[b, a] = g[a, b];
-            }
-        }
-
-        return (g, k);
+        return (g, ww, cellW);
     }
 
     private static void Centred(int t, int[] cell, IReadOnlyList<int[]> dummy, int p, double[] mean, double[] z)

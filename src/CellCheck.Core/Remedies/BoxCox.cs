@@ -19,6 +19,9 @@ namespace CellCheck.Core.Remedies;
 /// </remarks>
 public static class BoxCox
 {
+    /// <summary>Above this many groups the profile is first scanned on the coarse grid (<see cref="ProfileLikelihood.CoarseStep"/>).</summary>
+    public const int CoarseGroups = 20000;
+
     /// <summary>Default search range for λ̂.</summary>
     public const double SearchLower = -5, SearchUpper = 5;
 
@@ -69,7 +72,9 @@ public static class BoxCox
             SettingRss settings => new GroupedPowerSums(settings.Starts, Array.ConvertAll(settings.Permutation, i => logs[i]), settings.Between).LogLikelihood,
             _ => l => LogLikelihood(rss, logs, l),
         };
-        var (lambda, max, lower, upper) = ProfileLikelihood.Maximise(profile, SearchLower, SearchUpper);
+        var groups = rss switch { GroupedRss g => g.Starts.Length, SettingRss s => s.Starts.Length, _ => y.Length };
+        var step = groups > CoarseGroups ? ProfileLikelihood.CoarseStep : ProfileLikelihood.GridStep;
+        var (lambda, max, lower, upper) = ProfileLikelihood.Maximise(profile, SearchLower, SearchUpper, step);
         return new PowerFit(PowerFamily.BoxCox, model, y.Length, rss.ResidualDf, lambda, max, lower, upper, SearchLower, SearchUpper, shift);
     }
 

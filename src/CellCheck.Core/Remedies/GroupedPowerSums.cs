@@ -116,13 +116,13 @@ internal sealed class GroupedPowerSums
                     continue;
                 }
 
-                var shift = (2 * lambda * centre[g]) - top;
+                var half = (lambda * centre[g]) - (top / 2);
+                var a = Math.Exp(half);
                 var (sum, squares) = Sums(g, n, lambda);
-                within[g] = n > 1 ? Math.Exp(shift) * squares : 0;
+                within[g] = n > 1 ? a * a * squares : 0;
                 if (means is not null)
                 {
-                    var a = Math.Exp(shift / 2);
-                    var b = lambda == 0 ? centre[g] - reference : PreciseMath.ExpM1(shift / 2) / lambda;
+                    var b = lambda == 0 ? centre[g] - reference : PreciseMath.ExpM1(half) / lambda;
                     means[g] = (a * sum / n) + b;
                 }
             }

@@ -19,18 +19,24 @@ internal static class ProfileLikelihood
     /// <summary>Grid step for the first scan.</summary>
     public const double GridStep = 0.05;
 
+    /// <summary>Grid step for the first scan of a costly profile (a design with tens of thousands of settings).</summary>
+    public const double CoarseStep = 0.25;
+
     /// <summary>χ²₁(0.95)/2, the drop in log-likelihood that bounds the 95% interval.</summary>
     public static readonly double Cut = ChiSquared.InvCDF(1, PowerFit.Level) / 2;
 
-    public static (double Lambda, double Max, double? Lower, double? Upper) Maximise(Func<double, double> logLikelihood, double lower, double upper)
+    /// <param name="gridStep">The first scan's step: <see cref="GridStep"/>, or <see cref="CoarseStep"/> where one evaluation
+    /// is costly (the scan then finds the global maximum only among maxima at least that far apart).</param>
+    public static (double Lambda, double Max, double? Lower, double? Upper) Maximise(Func<double, double> logLikelihood, double lower, double upper,
+        double gridStep = GridStep)
     {
-        var steps = (int)Math.Round((upper - lower) / GridStep);
+        var steps = (int)Math.Round((upper - lower) / gridStep);
         var grid = new double[steps + 1];
         var values = new double[steps + 1];
         var best = 0;
         for (var k = 0; k <= steps; k++)
         {
-            grid[k] = k == steps ? upper : lower + (k * GridStep);
+            grid[k] = k == steps ? upper : lower + (k * gridStep);
             values[k] = logLikelihood(grid[k]);
             if (values[k] > values[best] || double.IsNaN(values[best]))
             {

@@ -18,14 +18,24 @@ internal static class PrimaryDecisions
     public static (double Normality, double Spread) Statistics(CellPartition partition, ResidualSet residuals, ShapeCalibration calibration) =>
         new PrimaryEvaluator(calibration.Choice, partition.Values.Starts).Stats(residuals.Residuals, residuals.Studentized);
 
+    /// <summary>The primary statistics read off the pooled and spread checks, which compute the same tests on the same
+    /// residuals (used when p comes from the reference distributions, so no simulation needs the evaluator).</summary>
+    private static (double Normality, double Spread) FromChecks(PooledResult pooled, SpreadResult spread, PrimaryChoice choice, string normalityCheck, string spreadCheck)
+    {
+        var n = choice.Normality == NormalityPrimary.None ? null : pooled.Checks.FirstOrDefault(c => c.Check == normalityCheck);
+        var normality = n is { Statistic: { } w } && n.Reason is null
+            ? (choice.Normality == NormalityPrimary.ShapiroWilkPooled ? 1.0 - w : w)
+            : double.NaN;
+        var sp = choice.Spread == SpreadPrimary.None ? null : spread.Checks.FirstOrDefault(c => c.Check == spreadCheck);
+        return (normality, sp is { Statistic: { } f } && sp.Reason is null ? f : double.NaN);
+    }
+
     public static List<AssumptionVerdict> Decide(CellPartition partition, ResidualSet residuals, PooledResult pooled, SpreadResult spread,
         OrderResult order, ShapeCalibration calibration, double alpha, ResolutionSummary? resolution = null, CalibrationSettings? settings = null,
         (double Normality, double Spread)? statistics = null)
     {
         var choice = calibration.Choice;
         double pNormality, pSpread;
-        var (normality, spreadStat) = statistics ?? Statistics(partition, residuals, calibration);
-
         var normalityCheck = choice.Normality == NormalityPrimary.ShapiroWilkPooled ? CheckNames.ShapiroWilk : CheckNames.AndersonDarling;
         var spreadCheck = choice.Spread switch
         {
@@ -33,6 +43,8 @@ internal static class PrimaryDecisions
             SpreadPrimary.BrownForsythe => CheckNames.BrownForsythe,
             _ => CheckNames.BrownForsytheZerosRemoved,
         };
+        var (normality, spreadStat) = statistics
+            ?? (calibration.MonteCarlo ? Statistics(partition, residuals, calibration) : FromChecks(pooled, spread, choice, normalityCheck, spreadCheck));
         if (calibration.MonteCarlo)
         {
             pNormality = calibration.NormalityNull!.PValue(normality);

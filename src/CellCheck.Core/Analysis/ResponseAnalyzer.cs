@@ -30,9 +30,9 @@ public static class ResponseAnalyzer
         OrderResult order = null!;
         ResolutionSummary resolution = null!;
         var calibration = Calibrator.Calibrate(residuals.NullPlan, options.Alpha, options.Simulation);
-        (double, double) primary = default;
+        (double, double)? primary = null;
         Parallel.Invoke(
-            () => primary = PrimaryDecisions.Statistics(partition, residuals, calibration),
+            () => primary = calibration.MonteCarlo ? PrimaryDecisions.Statistics(partition, residuals, calibration) : null,
             () =>
             {
                 cells = CellChecks.Run(partition, residuals, column.Origin, options, column.Name);

@@ -21,6 +21,54 @@ internal static class SettingGroups
             return (result, partition.CellCount);
         }
 
+        // block levels as one mixed-radix key; a dense key → setting map, cleared cell by cell through the keys touched
+        var keys = blocks.Aggregate(1L, (product, b) => product * (b.Levels.Count + 1));
+        var count = 0;
+        if (keys > 1 << 24)
+        {
+            return Sparse(partition, blocks, result);
+        }
+
+        var map = new int[keys];
+        Array.Fill(map, -1);
+        var touched = new List<long>();
+        for (var c = 0; c < partition.CellCount; c++)
+        {
+            foreach (var key in touched)
+            {
+                map[key] = -1;
+            }
+
+            touched.Clear();
+            for (var i = partition.Values.Starts[c]; i < partition.Values.Starts[c + 1]; i++)
+            {
+                var key = Key(blocks, partition.RowOrder[i]);
+                if (map[key] < 0)
+                {
+                    map[key] = count++;
+                    touched.Add(key);
+                }
+
+                result[i] = map[key];
+            }
+        }
+
+        return (result, count);
+    }
+
+    private static long Key(IReadOnlyList<FactorColumn> blocks, int row)
+    {
+        var key = 0L;
+        foreach (var b in blocks)
+        {
+            key = (key * (b.Levels.Count + 1)) + b.Codes[row] + 1;
+        }
+
+        return key;
+    }
+
+    private static (int[] Settings, int Count) Sparse(CellPartition partition, IReadOnlyList<FactorColumn> blocks, int[] result)
+    {
         var count = 0;
         var local = new Dictionary<long, int>();
         for (var c = 0; c < partition.CellCount; c++)
@@ -28,13 +76,7 @@ internal static class SettingGroups
             local.Clear();
             for (var i = partition.Values.Starts[c]; i < partition.Values.Starts[c + 1]; i++)
             {
-                var row = partition.RowOrder[i];
-                var key = 0L;
-                foreach (var b in blocks)
-                {
-                    key = (key * (b.Levels.Count + 1)) + b.Codes[row] + 1;
-                }
-
+                var key = Key(blocks, partition.RowOrder[i]);
                 if (!local.TryGetValue(key, out var g))
                 {
                     g = count++;

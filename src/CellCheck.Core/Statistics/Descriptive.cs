@@ -64,9 +64,27 @@ public static class Descriptive
 
         var s = scratch[..x.Length];
         x.CopyTo(s);
-        s.Sort();
         var mid = s.Length / 2;
-        return s.Length % 2 == 1 ? s[mid] : 0.5 * (s[mid - 1] + s[mid]);
+        if (s.Length <= 64)
+        {
+            s.Sort();
+            return s.Length % 2 == 1 ? s[mid] : 0.5 * (s[mid - 1] + s[mid]);
+        }
+
+        // selection instead of a full sort: linear time for the millions of residuals of a large design
+        var upper = Selection.Select(s, mid);
+        if (s.Length % 2 == 1)
+        {
+            return upper;
+        }
+
+        var lower = double.NegativeInfinity;
+        foreach (var v in s[..mid])
+        {
+            lower = Math.Max(lower, v);
+        }
+
+        return 0.5 * (lower + upper);
     }
 
     /// <summary>Median of a span (allocates a scratch copy; use the scratch overload in hot loops).</summary>

@@ -51,6 +51,7 @@ public static class ResponseAnalyzer
             Resolution = resolution,
             Replicates = Planning.ReplicatesAssessor.Assess(census, residuals, options),
             Rows = Rows(data, partition, residuals, column.Origin),
+            Partition = partition,
         };
     }
 

@@ -32,4 +32,7 @@ public sealed record ResponseReport(
 
     /// <summary>Are there enough replicates: census verdict and the sensitivity of the single checks.</summary>
     public Planning.ReplicatesResult? Replicates { get; init; }
+
+    /// <summary>The cells of this analysis, kept for the remedy step so it need not partition the rows again (not reported).</summary>
+    internal Cells.CellPartition? Partition { get; init; }
 }

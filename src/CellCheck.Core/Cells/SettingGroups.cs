@@ -59,9 +59,9 @@ internal static class SettingGroups
     private static long Key(IReadOnlyList<FactorColumn> blocks, int row)
     {
         var key = 0L;
-        foreach (var b in blocks)
+        for (var j = 0; j < blocks.Count; j++)
         {
-            key = (key * (b.Levels.Count + 1)) + b.Codes[row] + 1;
+            key = (key * (blocks[j].Levels.Count + 1)) + blocks[j].Codes[row] + 1;
         }
 
         return key;

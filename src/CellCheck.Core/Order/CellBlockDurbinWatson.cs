@@ -20,7 +20,7 @@ public static class CellBlockDurbinWatson
     /// <param name="cell">The cell of each residual, in run order.</param>
     /// <param name="dummy">Per block factor, the block-contrast column (0 .. p − 1) of each residual in run order, or −1 for the first level.</param>
     /// <returns>Null when the block contrasts are not estimable apart from the cells over these rows.</returns>
-    public static DurbinWatsonResult? Test(ReadOnlySpan<double> residuals, int[] cell, int cells, IReadOnlyList<int[]> dummy, int p,
+    public static DurbinWatsonResult? Test(ReadOnlySpan<double> residuals, int[] cell, int cells, int[][] dummy, int p,
         DurbinWatsonAlternative alternative = DurbinWatsonAlternative.Positive)
     {
         var n = residuals.Length;
@@ -97,104 +97,151 @@ public static class CellBlockDurbinWatson
         return new DurbinWatsonResult(d, pValue, expected, variance, OrderMethods.NormalApproximation, alternative);
     }
 
-    /// <summary>G = ZᵀAZ = Σ (z_t − z_{t−1})(z_t − z_{t−1})ᵀ and K = WᵀM_cW with W = AZ, over the run sequence
-    /// (two halves of the sequence accumulated in parallel, then added in a fixed order).</summary>
-    private static (double[,] G, double[,] K) Accumulate(int[] cell, int cells, IReadOnlyList<int[]> dummy, int p, double[] mean, double[] size)
+    /// <summary>
+    /// G = ZᵀAZ and K = WᵀM_cW with W = AZ, without forming Z: z_t = x_t − m_{c_t} splits every sum into a sparse part
+    /// (the block indicators x) and a part in the cell means m, which is gathered per cell and multiplied out once:
+    /// O(n·(B² + p)) for the run sequence plus O(cells·p²).
+    /// </summary>
+    private static (double[,] G, double[,] K) Accumulate(int[] cell, int cells, int[][] dummy, int p, double[] mean, double[] size)
     {
         var n = cell.Length;
-        var halves = new (double[] G, double[] WW, double[] CellW)[2];
-        Parallel.For(0, 2, h => halves[h] = Range(cell, cells, dummy, p, mean, h * n / 2, (h + 1) * n / 2));
-        var g = new double[p, p];
-        var k = new double[p, p];
-        var cellW = halves[0].CellW;
-        for (var i = 0; i < cellW.Length; i++)
+        var g = new double[p, p];       // sparse parts, then the whole of G
+        var k = new double[p, p];       // sparse parts, then the whole of K
+        var r = new double[cells * p];  // Σ δ_t[a] per cell of the mean it meets (for Σ δμᵀ)
+        var count = new double[cells];  // times each cell's mean enters μ_t
+        var partner = new double[cells * p]; // Σ of the other mean in μ_t
+        var r2 = new double[cells * p]; // Σ α_t[a]·coef per cell of the mean it meets (for Σ αβᵀ)
+        var v = new double[cells * p];  // Σ coef·β_t per cell (for Σ ββᵀ)
+        var sAlpha = new double[cells * p];
+        var sBeta = new double[cells * p];
+        var beta = new double[p];
+        Span<int> idx = stackalloc int[3 * dummy.Length];
+        Span<double> val = stackalloc double[3 * dummy.Length];
+        for (var t = 0; t < n; t++)
         {
-            cellW[i] += halves[1].CellW[i];
+            var c = cell[t];
+            if (t > 0)
+            {
+                // G: d_t = δ_t − μ_t with δ_t = x_t − x_{t−1}, μ_t = m_c − m_b
+                var b = cell[t - 1];
+                var m = 0;
+                m = Put(dummy, t, 1, idx, val, m);
+                m = Put(dummy, t - 1, -1, idx, val, m);
+                for (var i = 0; i < m; i++)
+                {
+                    for (var j = 0; j < m; j++)
+                    {
+                        g[idx[i], idx[j]] += val[i] * val[j];
+                    }
+
+                    r[(c * p) + idx[i]] += val[i];
+                    r[(b * p) + idx[i]] -= val[i];
+                }
+
+                count[c]++;
+                count[b]++;
+                for (var a = 0; a < p; a++)
+                {
+                    partner[(c * p) + a] += mean[(b * p) + a];
+                    partner[(b * p) + a] += mean[(c * p) + a];
+                }
+            }
+
+            // K: w_t = α_t − β_t, α_t = deg·x_t − x_{t−1} − x_{t+1}, β_t = deg·m_c − m_{c−} − m_{c+}
+            var degree = (t > 0 ? 1 : 0) + (t + 1 < n ? 1 : 0);
+            var terms = 0;
+            terms = Put(dummy, t, degree, idx, val, terms);
+            if (t > 0)
+            {
+                terms = Put(dummy, t - 1, -1, idx, val, terms);
+            }
+
+            if (t + 1 < n)
+            {
+                terms = Put(dummy, t + 1, -1, idx, val, terms);
+            }
+
+            for (var a = 0; a < p; a++)
+            {
+                beta[a] = (degree * mean[(c * p) + a]) - (t > 0 ? mean[(cell[t - 1] * p) + a] : 0) - (t + 1 < n ? mean[(cell[t + 1] * p) + a] : 0);
+                sBeta[(c * p) + a] += beta[a];
+                v[(c * p) + a] += degree * beta[a];
+                if (t > 0)
+                {
+                    v[(cell[t - 1] * p) + a] -= beta[a];
+                }
+
+                if (t + 1 < n)
+                {
+                    v[(cell[t + 1] * p) + a] -= beta[a];
+                }
+            }
+
+            for (var i = 0; i < terms; i++)
+            {
+                for (var j = 0; j < terms; j++)
+                {
+                    k[idx[i], idx[j]] += val[i] * val[j];
+                }
+
+                sAlpha[(c * p) + idx[i]] += val[i];
+                r2[(c * p) + idx[i]] += degree * val[i];
+                if (t > 0)
+                {
+                    r2[(cell[t - 1] * p) + idx[i]] -= val[i];
+                }
+
+                if (t + 1 < n)
+                {
+                    r2[(cell[t + 1] * p) + idx[i]] -= val[i];
+                }
+            }
         }
 
         for (var a = 0; a < p; a++)
         {
             for (var b = 0; b < p; b++)
             {
-                var between = 0.0;
+                double deltaMu = 0, muMu = 0, alphaBeta = 0, betaAlpha = 0, betaBeta = 0, between = 0;
+                double muDelta = 0;
                 for (var c = 0; c < cells; c++)
                 {
-                    between += size[c] > 0 ? cellW[(c * p) + a] * cellW[(c * p) + b] / size[c] : 0;
+                    var ma = mean[(c * p) + a];
+                    var mb = mean[(c * p) + b];
+                    deltaMu += r[(c * p) + a] * mb;
+                    muDelta += ma * r[(c * p) + b];
+                    muMu += (count[c] * ma * mb) - (ma * partner[(c * p) + b]);
+                    alphaBeta += r2[(c * p) + a] * mb;
+                    betaAlpha += ma * r2[(c * p) + b];
+                    betaBeta += ma * v[(c * p) + b];
+                    if (size[c] > 0)
+                    {
+                        var sa = sAlpha[(c * p) + a] - sBeta[(c * p) + a];
+                        var sb = sAlpha[(c * p) + b] - sBeta[(c * p) + b];
+                        between += sa * sb / size[c];
+                    }
                 }
 
-                g[a, b] = halves[0].G[(a * p) + b] + halves[1].G[(a * p) + b];
-                k[a, b] = halves[0].WW[(a * p) + b] + halves[1].WW[(a * p) + b] - between;
+                g[a, b] += muMu - deltaMu - muDelta;
+                k[a, b] += betaBeta - alphaBeta - betaAlpha - between;
             }
         }
 
         return (g, k);
     }
 
-    private static (double[] G, double[] WW, double[] CellW) Range(int[] cell, int cells, IReadOnlyList<int[]> dummy, int p, double[] mean, int from, int to)
+    /// <summary>Appends the block indicators of position t with weight <paramref name="weight"/> to the sparse list.</summary>
+    private static int Put(int[][] dummy, int t, double weight, Span<int> idx, Span<double> val, int m)
     {
-        var n = cell.Length;
-        var g = new double[p * p];
-        var ww = new double[p * p];
-        var cellW = new double[cells * p];
-        var previous = new double[p];
-        var current = new double[p];
-        var next = new double[p];
-        var d = new double[p];
-        var w = new double[p];
-        if (from > 0)
-        {
-            Centred(from - 1, cell, dummy, p, mean, previous);
-        }
-
-        if (from < to)
-        {
-            Centred(from, cell, dummy, p, mean, current);
-        }
-
-        for (var t = from; t < to; t++)
-        {
-            if (t + 1 < n)
-            {
-                Centred(t + 1, cell, dummy, p, mean, next);
-            }
-
-            var degree = (t > 0 ? 1 : 0) + (t + 1 < n ? 1 : 0);
-            for (var a = 0; a < p; a++)
-            {
-                d[a] = current[a] - previous[a];
-                w[a] = (degree * current[a]) - (t > 0 ? previous[a] : 0) - (t + 1 < n ? next[a] : 0);
-                cellW[(cell[t] * p) + a] += w[a];
-            }
-
-            for (var a = 0; a < p; a++)
-            {
-                if (t > 0)
-                {
-                    VectorKernels.AddScaled(g.AsSpan(a * p, p), d[a], d);
-                }
-
-                VectorKernels.AddScaled(ww.AsSpan(a * p, p), w[a], w);
-            }
-
-            (previous, current, next) = (current, next, previous);
-        }
-
-        return (g, ww, cellW);
-    }
-
-    private static void Centred(int t, int[] cell, IReadOnlyList<int[]> dummy, int p, double[] mean, double[] z)
-    {
-        for (var a = 0; a < p; a++)
-        {
-            z[a] = -mean[(cell[t] * p) + a];
-        }
-
         foreach (var column in dummy)
         {
             if (column[t] >= 0)
             {
-                z[column[t]] += 1;
+                idx[m] = column[t];
+                val[m++] = weight;
             }
         }
+
+        return m;
     }
 }

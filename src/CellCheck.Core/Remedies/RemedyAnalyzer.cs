@@ -23,7 +23,7 @@ public static class RemedyAnalyzer
         spec ??= ModelSpec.Full(data.Factors.Count);
         var column = data.Responses[response];
         var shift = request?.Shift ?? 0;
-        var partition = CellPartition.Build(data.Factors, column.Values, data.Blocks);
+        var partition = before.Partition ?? CellPartition.Build(data.Factors, column.Values, data.Blocks);
         var y = partition.Values.Values.Select(v => column.Origin + shift + v).ToArray();
         var rss = y.Length == 0 ? null : Model(data, spec, partition, before.Model.Info);
         var model = before.Model.Info.Name;

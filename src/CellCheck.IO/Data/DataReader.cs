@@ -13,10 +13,37 @@ namespace CellCheck.IO.Data;
 /// </summary>
 public static class DataReader
 {
+    /// <summary>Delimited files above this size are checked for encoding faults on a second thread while they are parsed;
+    /// a fault, when found, is reported in place of whatever the parse gave.</summary>
+    public const long ConcurrentScanBytes = 8 << 20;
+
     public static LoadResult<DesignData> Read(DesignFile design)
     {
         ArgumentNullException.ThrowIfNull(design);
-        var opened = TableOpener.Open(design);
+        var path = design.DataPath;
+        var scan = TableOpener.IsText(path) && File.Exists(path) && new FileInfo(path).Length > ConcurrentScanBytes
+            ? Task.Run(() => ScanQuietly(path))
+            : null;
+        var result = Parse(design, scan is not null);
+        return scan?.Result is { } fault ? LoadResult<DesignData>.Failure(TextFiles.TextProblems.For(fault, path, design: false)) : result;
+    }
+
+    /// <summary>The encoding check, leaving a file that cannot be read to the parse, which reports it.</summary>
+    private static TextFiles.TextFault? ScanQuietly(string path)
+    {
+        try
+        {
+            return TableOpener.ScanText(path);
+        }
+        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
+        {
+            return null;
+        }
+    }
+
+    private static LoadResult<DesignData> Parse(DesignFile design, bool scanned)
+    {
+        var opened = TableOpener.Open(design, scanned);
         if (opened.Problem is not null)
         {
             return LoadResult<DesignData>.Failure(opened.Problem);

@@ -7,7 +7,8 @@ namespace CellCheck.IO.Data;
 /// <summary>Opens the design's data file as delimited text or an XLSX sheet, and checks its header.</summary>
 internal static class TableOpener
 {
-    public static (ITableRows? Table, Problem? Problem) Open(DesignFile design)
+    /// <param name="scanned">True when the caller checks the file's encoding itself (<see cref="ScanText"/>).</param>
+    public static (ITableRows? Table, Problem? Problem) Open(DesignFile design, bool scanned = false)
     {
         var path = design.DataPath;
         Problem Fail(string code, int? line, string what, string fix, bool inDesign = false) =>
@@ -47,9 +48,9 @@ internal static class TableOpener
 
                 table = xlsx;
             }
-            else if (extension is ".csv" or ".tsv" or ".txt")
+            else if (IsText(path))
             {
-                if (ScanText(path) is { } fault)
+                if (!scanned && ScanText(path) is { } fault)
                 {
                     return (null, TextProblems.For(fault, path, design: false));
                 }
@@ -88,7 +89,10 @@ internal static class TableOpener
         }
     }
 
-    private static TextFault? ScanText(string path)
+    /// <summary>True for the delimited-text extensions.</summary>
+    public static bool IsText(string path) => Path.GetExtension(path).ToLowerInvariant() is ".csv" or ".tsv" or ".txt";
+
+    public static TextFault? ScanText(string path)
     {
         using var stream = new FileStream(path, FileMode.Open, FileAccess.Read, FileShare.Read, 1 << 16);
         return TextScan.Scan(stream, TextScan.MaxLineBytes);

@@ -42,7 +42,10 @@ public static class AndersonDarling
         try
         {
             sample.CopyTo(sorted);
-            sorted.Sort();
+            if (!RadixSort.IsAscending(sorted))
+            {
+                RadixSort.Sort(sorted);
+            }
             if (SampleGuard.HasNoSpread(sorted[0], sorted[^1]))
             {
                 return TestOutcome.NotTestable(NotTestableReason.ZeroSpread);

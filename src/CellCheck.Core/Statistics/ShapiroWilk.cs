@@ -45,7 +45,10 @@ public static class ShapiroWilk
         try
         {
             sample.CopyTo(sorted);
-            sorted.Sort();
+            if (!RadixSort.IsAscending(sorted))
+            {
+                RadixSort.Sort(sorted);
+            }
             return FromSorted(sorted);
         }
         finally

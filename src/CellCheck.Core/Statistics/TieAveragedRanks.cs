@@ -16,7 +16,7 @@ internal static class TieAveragedRanks
             order[i] = i;
         }
 
-        Array.Sort(keys, order);
+        RadixSort.Sort(keys, order);
         var start = 0;
         while (start < n)
         {

@@ -1,0 +1,153 @@
+using System.Buffers;
+
+namespace CellCheck.Core.Statistics;
+
+/// <summary>
+/// Ascending sort of doubles (optionally carrying an int payload) by least-significant-digit radix sort on the
+/// order-preserving bit pattern of each value (sign bit flipped for positives, all bits for negatives; Knuth, TAOCP
+/// vol. 3, §5.2.5), four passes of 16 bits, a pass skipped when every value shares its digit. Stable; linear time;
+/// used above <see cref="Threshold"/> values, where it is several times faster than the comparison sort. No NaN.
+/// </summary>
+internal static class RadixSort
+{
+    /// <summary>Below this many values the comparison sort is used.</summary>
+    public const int Threshold = 1 << 16;
+
+    /// <summary>True when the values are already in ascending order (a sorted sample is not sorted again).</summary>
+    public static bool IsAscending(ReadOnlySpan<double> values)
+    {
+        for (var i = 1; i < values.Length; i++)
+        {
+            if (values[i] < values[i - 1])
+            {
+                return false;
+            }
+        }
+
+        return true;
+    }
+
+    public static void Sort(Span<double> values)
+    {
+        if (values.Length < Threshold)
+        {
+            values.Sort();
+            return;
+        }
+
+        var keys = ArrayPool<ulong>.Shared.Rent(values.Length);
+        var spare = ArrayPool<ulong>.Shared.Rent(values.Length);
+        try
+        {
+            for (var i = 0; i < values.Length; i++)
+            {
+                keys[i] = Key(values[i]);
+            }
+
+            var sorted = Passes(keys, spare, null, null, values.Length) ? spare : keys;
+            for (var i = 0; i < values.Length; i++)
+            {
+                values[i] = Value(sorted[i]);
+            }
+        }
+        finally
+        {
+            ArrayPool<ulong>.Shared.Return(keys);
+            ArrayPool<ulong>.Shared.Return(spare);
+        }
+    }
+
+    /// <summary>Sorts <paramref name="values"/> and applies the same permutation to <paramref name="payload"/> (stable).</summary>
+    public static void Sort(Span<double> values, Span<int> payload)
+    {
+        if (values.Length < Threshold)
+        {
+            var k = values.ToArray();
+            var p = payload.ToArray();
+            Array.Sort(k, p);
+            k.CopyTo(values);
+            p.CopyTo(payload);
+            return;
+        }
+
+        var keys = ArrayPool<ulong>.Shared.Rent(values.Length);
+        var spare = ArrayPool<ulong>.Shared.Rent(values.Length);
+        var carried = ArrayPool<int>.Shared.Rent(values.Length);
+        var source = ArrayPool<int>.Shared.Rent(values.Length);
+        try
+        {
+            for (var i = 0; i < values.Length; i++)
+            {
+                keys[i] = Key(values[i]);
+            }
+
+            payload.CopyTo(source);
+            var inSpare = Passes(keys, spare, source, carried, values.Length);
+            var (sortedKeys, sortedPayload) = inSpare ? (spare, carried) : (keys, source);
+            for (var i = 0; i < values.Length; i++)
+            {
+                values[i] = Value(sortedKeys[i]);
+            }
+
+            sortedPayload.AsSpan(0, values.Length).CopyTo(payload);
+        }
+        finally
+        {
+            ArrayPool<ulong>.Shared.Return(keys);
+            ArrayPool<ulong>.Shared.Return(spare);
+            ArrayPool<int>.Shared.Return(carried);
+            ArrayPool<int>.Shared.Return(source);
+        }
+    }
+
+    private static ulong Key(double value)
+    {
+        var bits = (ulong)BitConverter.DoubleToInt64Bits(value == 0 ? 0.0 : value); // −0 sorts with +0
+        return (bits & 0x8000_0000_0000_0000UL) != 0 ? ~bits : bits | 0x8000_0000_0000_0000UL;
+    }
+
+    private static double Value(ulong key) =>
+        BitConverter.Int64BitsToDouble((long)((key & 0x8000_0000_0000_0000UL) != 0 ? key & 0x7FFF_FFFF_FFFF_FFFFUL : ~key));
+
+    /// <summary>Runs the passes between the two buffers; true when the result ended in the spare buffers.</summary>
+    private static bool Passes(ulong[] keys, ulong[] spare, int[]? payload, int[]? carried, int n)
+    {
+        var counts = new int[1 << 16];
+        var swapped = false;
+        for (var shift = 0; shift < 64; shift += 16)
+        {
+            Array.Clear(counts);
+            for (var i = 0; i < n; i++)
+            {
+                counts[(int)((keys[i] >> shift) & 0xFFFF)]++;
+            }
+
+            if (counts[(int)((keys[0] >> shift) & 0xFFFF)] == n)
+            {
+                continue; // every key has this digit
+            }
+
+            var total = 0;
+            for (var d = 0; d < counts.Length; d++)
+            {
+                (counts[d], total) = (total, total + counts[d]);
+            }
+
+            for (var i = 0; i < n; i++)
+            {
+                var at = counts[(int)((keys[i] >> shift) & 0xFFFF)]++;
+                spare[at] = keys[i];
+                if (payload is not null)
+                {
+                    carried![at] = payload[i];
+                }
+            }
+
+            (keys, spare) = (spare, keys);
+            (payload, carried) = (carried, payload);
+            swapped = !swapped;
+        }
+
+        return swapped;
+    }
+}

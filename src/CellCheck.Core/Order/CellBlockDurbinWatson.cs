@@ -24,7 +24,8 @@ public static class CellBlockDurbinWatson
         DurbinWatsonAlternative alternative = DurbinWatsonAlternative.Positive)
     {
         var n = residuals.Length;
-        var (traceCell, traceCell2, groups) = GroupedDurbinWatson.Traces(cell, cells);
+        (double TraceMA, double TraceMA2, int Groups) traces = default;
+        var tracing = Task.Run(() => traces = GroupedDurbinWatson.Traces(cell, cells));
         var size = new double[cells];
         var mean = new double[cells * p];
         var c = new double[p, p];
@@ -67,13 +68,15 @@ public static class CellBlockDurbinWatson
 
         var cm = Matrix<double>.Build.DenseOfArray(c);
         var eigen = cm.Evd(Symmetricity.Symmetric).EigenValues.Select(v => v.Real).ToArray();
-        var rank = groups + p;
+        var rank = size.Count(v => v > 0) + p;
         if (n < rank + 2 || !(eigen.Min() > 1e-9 * Math.Max(1.0, eigen.Max())))
         {
             return null;
         }
 
         var (gMatrix, kMatrix) = Accumulate(cell, cells, dummy, p, mean, size);
+        tracing.Wait();
+        var (traceCell, traceCell2, _) = traces;
         var inverse = cm.Inverse();
         var cg = inverse * Matrix<double>.Build.DenseOfArray(gMatrix);
         var traceMA = traceCell - cg.Trace();
@@ -105,119 +108,52 @@ public static class CellBlockDurbinWatson
     private static (double[,] G, double[,] K) Accumulate(int[] cell, int cells, int[][] dummy, int p, double[] mean, double[] size)
     {
         var n = cell.Length;
-        var g = new double[p, p];       // sparse parts, then the whole of G
-        var k = new double[p, p];       // sparse parts, then the whole of K
-        var r = new double[cells * p];  // Σ δ_t[a] per cell of the mean it meets (for Σ δμᵀ)
-        var count = new double[cells];  // times each cell's mean enters μ_t
-        var partner = new double[cells * p]; // Σ of the other mean in μ_t
-        var r2 = new double[cells * p]; // Σ α_t[a]·coef per cell of the mean it meets (for Σ αβᵀ)
-        var v = new double[cells * p];  // Σ coef·β_t per cell (for Σ ββᵀ)
-        var sAlpha = new double[cells * p];
-        var sBeta = new double[cells * p];
-        var beta = new double[p];
-        Span<int> idx = stackalloc int[3 * dummy.Length];
-        Span<double> val = stackalloc double[3 * dummy.Length];
-        for (var t = 0; t < n; t++)
-        {
-            var c = cell[t];
-            if (t > 0)
-            {
-                // G: d_t = δ_t − μ_t with δ_t = x_t − x_{t−1}, μ_t = m_c − m_b
-                var b = cell[t - 1];
-                var m = 0;
-                m = Put(dummy, t, 1, idx, val, m);
-                m = Put(dummy, t - 1, -1, idx, val, m);
-                for (var i = 0; i < m; i++)
-                {
-                    for (var j = 0; j < m; j++)
-                    {
-                        g[idx[i], idx[j]] += val[i] * val[j];
-                    }
-
-                    r[(c * p) + idx[i]] += val[i];
-                    r[(b * p) + idx[i]] -= val[i];
-                }
-
-                count[c]++;
-                count[b]++;
-                for (var a = 0; a < p; a++)
-                {
-                    partner[(c * p) + a] += mean[(b * p) + a];
-                    partner[(b * p) + a] += mean[(c * p) + a];
-                }
-            }
-
-            // K: w_t = α_t − β_t, α_t = deg·x_t − x_{t−1} − x_{t+1}, β_t = deg·m_c − m_{c−} − m_{c+}
-            var degree = (t > 0 ? 1 : 0) + (t + 1 < n ? 1 : 0);
-            var terms = 0;
-            terms = Put(dummy, t, degree, idx, val, terms);
-            if (t > 0)
-            {
-                terms = Put(dummy, t - 1, -1, idx, val, terms);
-            }
-
-            if (t + 1 < n)
-            {
-                terms = Put(dummy, t + 1, -1, idx, val, terms);
-            }
-
-            for (var a = 0; a < p; a++)
-            {
-                beta[a] = (degree * mean[(c * p) + a]) - (t > 0 ? mean[(cell[t - 1] * p) + a] : 0) - (t + 1 < n ? mean[(cell[t + 1] * p) + a] : 0);
-                sBeta[(c * p) + a] += beta[a];
-                v[(c * p) + a] += degree * beta[a];
-                if (t > 0)
-                {
-                    v[(cell[t - 1] * p) + a] -= beta[a];
-                }
-
-                if (t + 1 < n)
-                {
-                    v[(cell[t + 1] * p) + a] -= beta[a];
-                }
-            }
-
-            for (var i = 0; i < terms; i++)
-            {
-                for (var j = 0; j < terms; j++)
-                {
-                    k[idx[i], idx[j]] += val[i] * val[j];
-                }
-
-                sAlpha[(c * p) + idx[i]] += val[i];
-                r2[(c * p) + idx[i]] += degree * val[i];
-                if (t > 0)
-                {
-                    r2[(cell[t - 1] * p) + idx[i]] -= val[i];
-                }
-
-                if (t + 1 < n)
-                {
-                    r2[(cell[t + 1] * p) + idx[i]] -= val[i];
-                }
-            }
-        }
-
+        var parts = new Partial[2];
+        Parallel.For(0, 2, h => parts[h] = Range(cell, cells, dummy, p, mean, h * n / 2, (h + 1) * n / 2));
+        var (first, second) = (parts[0], parts[1]);
+        var g = new double[p, p];
+        var k = new double[p, p];
         for (var a = 0; a < p; a++)
         {
             for (var b = 0; b < p; b++)
             {
-                double deltaMu = 0, muMu = 0, alphaBeta = 0, betaAlpha = 0, betaBeta = 0, between = 0;
-                double muDelta = 0;
+                g[a, b] = first.G[(a * p) + b] + second.G[(a * p) + b];
+                k[a, b] = first.K[(a * p) + b] + second.K[(a * p) + b];
+            }
+        }
+
+        var stride = Fields * p;
+        for (var i = 0; i < first.Cells.Length; i++)
+        {
+            first.Cells[i] += second.Cells[i];
+        }
+
+        for (var c = 0; c < cells; c++)
+        {
+            first.Count[c] += second.Count[c];
+        }
+
+        var acc = first.Cells;
+        for (var a = 0; a < p; a++)
+        {
+            for (var b = 0; b < p; b++)
+            {
+                double deltaMu = 0, muDelta = 0, muMu = 0, alphaBeta = 0, betaAlpha = 0, betaBeta = 0, between = 0;
                 for (var c = 0; c < cells; c++)
                 {
+                    var o = c * stride;
                     var ma = mean[(c * p) + a];
                     var mb = mean[(c * p) + b];
-                    deltaMu += r[(c * p) + a] * mb;
-                    muDelta += ma * r[(c * p) + b];
-                    muMu += (count[c] * ma * mb) - (ma * partner[(c * p) + b]);
-                    alphaBeta += r2[(c * p) + a] * mb;
-                    betaAlpha += ma * r2[(c * p) + b];
-                    betaBeta += ma * v[(c * p) + b];
+                    deltaMu += acc[o + (R * p) + a] * mb;
+                    muDelta += ma * acc[o + (R * p) + b];
+                    muMu += (first.Count[c] * ma * mb) - (ma * acc[o + (Partner * p) + b]);
+                    alphaBeta += acc[o + (R2 * p) + a] * mb;
+                    betaAlpha += ma * acc[o + (R2 * p) + b];
+                    betaBeta += ma * acc[o + (V * p) + b];
                     if (size[c] > 0)
                     {
-                        var sa = sAlpha[(c * p) + a] - sBeta[(c * p) + a];
-                        var sb = sAlpha[(c * p) + b] - sBeta[(c * p) + b];
+                        var sa = acc[o + (SAlpha * p) + a] - acc[o + (SBeta * p) + a];
+                        var sb = acc[o + (SAlpha * p) + b] - acc[o + (SBeta * p) + b];
                         between += sa * sb / size[c];
                     }
                 }
@@ -228,6 +164,108 @@ public static class CellBlockDurbinWatson
         }
 
         return (g, k);
+    }
+
+    // per-cell accumulators, interleaved so that one cell's fields share cache lines
+    private const int R = 0, Partner = 1, R2 = 2, V = 3, SAlpha = 4, SBeta = 5, Fields = 6;
+
+    private sealed record Partial(double[] G, double[] K, double[] Cells, double[] Count);
+
+    /// <summary>The terms of positions from .. to − 1 (neighbours are read across the range's ends).</summary>
+    private static Partial Range(int[] cell, int cells, int[][] dummy, int p, double[] mean, int from, int to)
+    {
+        var n = cell.Length;
+        var stride = Fields * p;
+        var g = new double[p * p];
+        var k = new double[p * p];
+        var acc = new double[cells * stride];
+        var count = new double[cells];
+        var beta = new double[p];
+        Span<int> idx = stackalloc int[3 * dummy.Length];
+        Span<double> val = stackalloc double[3 * dummy.Length];
+        for (var t = from; t < to; t++)
+        {
+            var c = cell[t];
+            var oc = c * stride;
+            if (t > 0)
+            {
+                // G: d_t = δ_t − μ_t with δ_t = x_t − x_{t−1}, μ_t = m_c − m_b
+                var b = cell[t - 1];
+                var ob = b * stride;
+                var m = Put(dummy, t, 1, idx, val, 0);
+                m = Put(dummy, t - 1, -1, idx, val, m);
+                for (var i = 0; i < m; i++)
+                {
+                    for (var j = 0; j < m; j++)
+                    {
+                        g[(idx[i] * p) + idx[j]] += val[i] * val[j];
+                    }
+
+                    acc[oc + (R * p) + idx[i]] += val[i];
+                    acc[ob + (R * p) + idx[i]] -= val[i];
+                }
+
+                count[c]++;
+                count[b]++;
+                for (var a = 0; a < p; a++)
+                {
+                    acc[oc + (Partner * p) + a] += mean[(b * p) + a];
+                    acc[ob + (Partner * p) + a] += mean[(c * p) + a];
+                }
+            }
+
+            // K: w_t = α_t − β_t, α_t = deg·x_t − x_{t−1} − x_{t+1}, β_t = deg·m_c − m_{c−} − m_{c+}
+            var degree = (t > 0 ? 1 : 0) + (t + 1 < n ? 1 : 0);
+            var previous = t > 0 ? cell[t - 1] * stride : -1;
+            var next = t + 1 < n ? cell[t + 1] * stride : -1;
+            var terms = Put(dummy, t, degree, idx, val, 0);
+            terms = t > 0 ? Put(dummy, t - 1, -1, idx, val, terms) : terms;
+            terms = t + 1 < n ? Put(dummy, t + 1, -1, idx, val, terms) : terms;
+            for (var a = 0; a < p; a++)
+            {
+                beta[a] = (degree * mean[(c * p) + a]) - (t > 0 ? mean[(cell[t - 1] * p) + a] : 0) - (t + 1 < n ? mean[(cell[t + 1] * p) + a] : 0);
+                acc[oc + (SBeta * p) + a] += beta[a];
+                acc[oc + (V * p) + a] += degree * beta[a];
+            }
+
+            if (previous >= 0)
+            {
+                for (var a = 0; a < p; a++)
+                {
+                    acc[previous + (V * p) + a] -= beta[a];
+                }
+            }
+
+            if (next >= 0)
+            {
+                for (var a = 0; a < p; a++)
+                {
+                    acc[next + (V * p) + a] -= beta[a];
+                }
+            }
+
+            for (var i = 0; i < terms; i++)
+            {
+                for (var j = 0; j < terms; j++)
+                {
+                    k[(idx[i] * p) + idx[j]] += val[i] * val[j];
+                }
+
+                acc[oc + (SAlpha * p) + idx[i]] += val[i];
+                acc[oc + (R2 * p) + idx[i]] += degree * val[i];
+                if (previous >= 0)
+                {
+                    acc[previous + (R2 * p) + idx[i]] -= val[i];
+                }
+
+                if (next >= 0)
+                {
+                    acc[next + (R2 * p) + idx[i]] -= val[i];
+                }
+            }
+        }
+
+        return new Partial(g, k, acc, count);
     }
 
     /// <summary>Appends the block indicators of position t with weight <paramref name="weight"/> to the sparse list.</summary>

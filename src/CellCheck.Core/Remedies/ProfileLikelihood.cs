@@ -47,7 +47,7 @@ internal static class ProfileLikelihood
         double lambda = grid[best], max = values[best];
         if (best > 0 && best < steps)
         {
-            var refined = BoundedBrent.Minimize(l => -logLikelihood(l), grid[best - 1], grid[best + 1], 1e-12);
+            var refined = BoundedBrent.Minimize(l => -logLikelihood(l), grid[best - 1], grid[best + 1], Tolerance(gridStep));
             var value = logLikelihood(refined);
             if (value >= max)
             {
@@ -56,12 +56,16 @@ internal static class ProfileLikelihood
         }
 
         var level = max - Cut;
-        return (lambda, max, End(logLikelihood, grid, values, lambda, level, -1), End(logLikelihood, grid, values, lambda, level, +1));
+        return (lambda, max, End(logLikelihood, grid, values, lambda, level, -1, Tolerance(gridStep)), End(logLikelihood, grid, values, lambda, level, +1, Tolerance(gridStep)));
     }
+
+    /// <summary>Tolerance on λ of the refinements: 1e-12 on the fine scan; 1e-8 on the coarse scan of a costly profile,
+    /// which is still below what ℓ's flatness at its maximum lets double precision resolve (about √ε relative).</summary>
+    private static double Tolerance(double gridStep) => gridStep > GridStep ? 1e-8 : 1e-12;
 
     /// <summary>The first crossing of <paramref name="level"/> from λ̂ in direction <paramref name="direction"/>,
     /// or null when ℓ stays above it to the end of the grid.</summary>
-    private static double? End(Func<double, double> logLikelihood, double[] grid, double[] values, double lambda, double level, int direction)
+    private static double? End(Func<double, double> logLikelihood, double[] grid, double[] values, double lambda, double level, int direction, double tolerance)
     {
         var inside = lambda;
         var points = Enumerable.Range(0, grid.Length).Where(k => direction < 0 ? grid[k] < lambda : grid[k] > lambda);
@@ -71,7 +75,7 @@ internal static class ProfileLikelihood
             if (values[k] < level)
             {
                 var (a, b) = direction < 0 ? (g, inside) : (inside, g);
-                return MathNet.Numerics.RootFinding.Brent.FindRoot(l => logLikelihood(l) - level, a, b, 1e-12, 200);
+                return MathNet.Numerics.RootFinding.Brent.FindRoot(l => logLikelihood(l) - level, a, b, tolerance, 200);
             }
 
             inside = g;

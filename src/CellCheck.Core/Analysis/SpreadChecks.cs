@@ -46,7 +46,8 @@ internal static class SpreadChecks
 
         // the five tests read the same values and write nothing shared: run side by side
         var checks = new CheckResult[5];
-        Parallel.Invoke(
+        // each test holds a few copies of the values: above a million rows one at a time, to bound memory
+        Parallel.Invoke(new ParallelOptions { MaxDegreeOfParallelism = grouped.Count > 1_000_000 ? 1 : -1 },
             () => checks[4] = CheckResults.From(CheckNames.FlignerKilleen, FlignerKilleen.Test(grouped), alpha),
             () => checks[1] = CheckResults.From(CheckNames.BrownForsythe, BrownForsythe.Test(grouped), alpha),
             () => checks[2] = CheckResults.From(CheckNames.BrownForsytheZerosRemoved, BrownForsytheZerosRemoved.Test(grouped), alpha),

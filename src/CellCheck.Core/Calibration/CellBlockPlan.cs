@@ -8,7 +8,7 @@ internal sealed class CellBlockPlan : INullPlan
 {
     private const double LeverageOne = 1e-10;
     private readonly CellBlockFit _fit;
-    private readonly double[] _scale;
+    private readonly Lazy<double[]> _scale;
     private readonly int _df;
 
     public CellBlockPlan(CellBlockFit fit, int[] cellStarts, double[] leverage, IReadOnlyList<int[]> blockCodes)
@@ -16,12 +16,13 @@ internal sealed class CellBlockPlan : INullPlan
         _fit = fit;
         CellStarts = cellStarts;
         Rows = leverage.Length;
-        _scale = new double[Rows];
-        for (var i = 0; i < Rows; i++)
+        foreach (var h in leverage)
         {
-            _scale[i] = 1.0 - leverage[i] > LeverageOne ? Math.Sqrt(1.0 - leverage[i]) : double.NaN;
-            UsableResiduals += double.IsNaN(_scale[i]) ? 0 : 1;
+            UsableResiduals += 1.0 - h > LeverageOne ? 1 : 0;
         }
+
+        // √(1 − h) per row, built only when a simulation asks for residuals (never above the Monte Carlo size limit)
+        _scale = new Lazy<double[]>(() => Array.ConvertAll(leverage, h => 1.0 - h > LeverageOne ? Math.Sqrt(1.0 - h) : double.NaN));
 
         _df = Rows - fit.Rank;
         Shape = new DesignShape(Enumerable.Range(0, cellStarts.Length - 1).Select(c => cellStarts[c + 1] - cellStarts[c]));
@@ -70,7 +71,7 @@ internal sealed class CellBlockPlan : INullPlan
         var s = Math.Sqrt(ss / _df);
         for (var i = 0; i < Rows; i++)
         {
-            studentized[i] = residuals[i] / (s * _scale[i]);
+            studentized[i] = residuals[i] / (s * _scale.Value[i]);
         }
     }
 }

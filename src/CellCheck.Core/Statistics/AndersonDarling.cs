@@ -20,6 +20,8 @@ namespace CellCheck.Core.Statistics;
 /// </remarks>
 public static class AndersonDarling
 {
+    private const int PoolLimit = 1 << 20;
+
     private const int StackLimit = 512;
     private const double TurningPoint = 5.709 / (2.0 * 0.0186);
 
@@ -38,7 +40,9 @@ public static class AndersonDarling
         double[]? rented = null;
         var sorted = sample.Length <= StackLimit
             ? stackalloc double[sample.Length]
-            : (rented = ArrayPool<double>.Shared.Rent(sample.Length)).AsSpan(0, sample.Length);
+            : sample.Length <= PoolLimit
+                ? (rented = ArrayPool<double>.Shared.Rent(sample.Length)).AsSpan(0, sample.Length)
+                : new double[sample.Length]; // a pool would keep arrays of millions of values alive
         try
         {
             sample.CopyTo(sorted);

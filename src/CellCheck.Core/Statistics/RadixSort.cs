@@ -1,5 +1,3 @@
-using System.Buffers;
-
 namespace CellCheck.Core.Statistics;
 
 /// <summary>
@@ -35,9 +33,8 @@ internal static class RadixSort
             return;
         }
 
-        var keys = ArrayPool<ulong>.Shared.Rent(values.Length);
-        var spare = ArrayPool<ulong>.Shared.Rent(values.Length);
-        try
+        var keys = new ulong[values.Length];
+        var spare = new ulong[values.Length];
         {
             for (var i = 0; i < values.Length; i++)
             {
@@ -49,11 +46,6 @@ internal static class RadixSort
             {
                 values[i] = Value(sorted[i]);
             }
-        }
-        finally
-        {
-            ArrayPool<ulong>.Shared.Return(keys);
-            ArrayPool<ulong>.Shared.Return(spare);
         }
     }
 
@@ -70,11 +62,10 @@ internal static class RadixSort
             return;
         }
 
-        var keys = ArrayPool<ulong>.Shared.Rent(values.Length);
-        var spare = ArrayPool<ulong>.Shared.Rent(values.Length);
-        var carried = ArrayPool<int>.Shared.Rent(values.Length);
-        var source = ArrayPool<int>.Shared.Rent(values.Length);
-        try
+        var keys = new ulong[values.Length];
+        var spare = new ulong[values.Length];
+        var carried = new int[values.Length];
+        var source = new int[values.Length];
         {
             for (var i = 0; i < values.Length; i++)
             {
@@ -90,13 +81,6 @@ internal static class RadixSort
             }
 
             sortedPayload.AsSpan(0, values.Length).CopyTo(payload);
-        }
-        finally
-        {
-            ArrayPool<ulong>.Shared.Return(keys);
-            ArrayPool<ulong>.Shared.Return(spare);
-            ArrayPool<int>.Shared.Return(carried);
-            ArrayPool<int>.Shared.Return(source);
         }
     }
 

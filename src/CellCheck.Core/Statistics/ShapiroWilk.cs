@@ -17,6 +17,8 @@ namespace CellCheck.Core.Statistics;
 /// </remarks>
 public static class ShapiroWilk
 {
+    private const int PoolLimit = 1 << 20;
+
     private const int StackLimit = 512;
 
     // Royston (1992, 1995) p-value polynomials, lowest power first.
@@ -41,7 +43,9 @@ public static class ShapiroWilk
         double[]? rented = null;
         var sorted = sample.Length <= StackLimit
             ? stackalloc double[sample.Length]
-            : (rented = ArrayPool<double>.Shared.Rent(sample.Length)).AsSpan(0, sample.Length);
+            : sample.Length <= PoolLimit
+                ? (rented = ArrayPool<double>.Shared.Rent(sample.Length)).AsSpan(0, sample.Length)
+                : new double[sample.Length]; // a pool would keep arrays of millions of values alive
         try
         {
             sample.CopyTo(sorted);

@@ -60,6 +60,10 @@ internal static class PlainDecimal
         return Math.Abs(magnitude) < ExactInteger ? magnitude / PowersOfTen[s] : null;
     }
 
+    /// <summary>m·10^−s correctly rounded (one division of exact operands), or null when |m| ≥ 2⁵³ is not exact in double.</summary>
+    public static double? ToDouble(long mantissa, int scale) =>
+        Math.Abs((double)mantissa) < ExactInteger ? mantissa / PowersOfTen[scale] : null;
+
     private static long PowersOfTenInteger(int k)
     {
         var result = 1L;

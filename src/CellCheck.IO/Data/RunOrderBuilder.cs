@@ -22,6 +22,13 @@ internal sealed class RunOrderBuilder(string column, string path, MissingTokens 
             return;
         }
 
+        if (syntax.Decimal == '.' && syntax.Thousands is null && PlainDecimal.TryParse(text, out var mantissa, out var scale) && PlainDecimal.ToDouble(mantissa, scale) is { } plain)
+        {
+            // a plain numeral: integer mantissa over an exact power of ten, rounded once (what double parsing gives)
+            _values.Add(plain);
+            return;
+        }
+
         if (syntax.ParseDouble(text) is var number && ResponseBuilder.InRange(number))
         {
             _values.Add(number);

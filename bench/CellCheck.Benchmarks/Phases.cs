@@ -21,8 +21,9 @@ internal static class Phases
         void Mark(string phase)
         {
             var now = clock.Elapsed.TotalSeconds;
-            Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{phase,-14} {now - last,8:F3} s  (heap {GC.GetTotalMemory(false) / 1e6,7:F0} MB, peak working set {Process.GetCurrentProcess().PeakWorkingSet64 / 1e6,7:F0} MB)"));
-            last = now;
+            var live = GC.GetTotalMemory(true); // a full collection: the bytes still reachable after this phase
+            Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{phase,-14} {now - last,8:F3} s  (live {live / 1e6,7:F0} MB, peak working set {Process.GetCurrentProcess().PeakWorkingSet64 / 1e6,7:F0} MB)"));
+            last = clock.Elapsed.TotalSeconds;
         }
 
         var file = DesignReader.Read(designPath).Value!;

@@ -41,7 +41,7 @@ public static class CellGridPlot
         var largest = shown.Length == 0 ? 0 : shown.Max(c => members[c].Count);
         // with no QQ panel every cell is a dot strip and the x axis means nothing: no ticks, no title
         var x = largest >= options.MinQq
-            ? AxisScale.Linear("normal quantile", -NormalScores.Blom(largest)[^1], NormalScores.Blom(largest)[^1])
+            ? AxisScale.Linear("normal quantile", -LastBlom(largest), LastBlom(largest))
             : new Axis(string.Empty, -1.3, 1.3, []);
 
         var envelopes = new Dictionary<int, QqEnvelope>();
@@ -98,6 +98,9 @@ public static class CellGridPlot
             + "scaled by the plotted values' mean and SD. It is pointwise: a point outside it is unusual at that position alone.";
     }
 
+    /// <summary>The largest Blom score of n, as NormalScores.Blom(n) gives it (by symmetry, minus the smallest).</summary>
+    private static double LastBlom(int n) => -Statistics.StandardNormal.Quantile((1 - 0.375) / (n + 0.25));
+
     private static Panel CellPanel(int index, CellResult cell, List<int> member, RowDiagnostics rows, Dictionary<int, OutlierRow> outliers, bool flagged,
         Axis x, Axis y, PlotOptions options, Dictionary<int, QqEnvelope> envelopes, string adjust)
     {
@@ -109,15 +112,23 @@ public static class CellGridPlot
         double[] xs;
         if (n >= options.MinQq)
         {
-            xs = NormalScores.Blom(n);
             var line = QuartileLine.Through(sorted);
+            var (mean, sd) = QqEnvelopes.MeanSd(sorted);
+            var thinned = n > PointThinning.MaxPoints;
+            var ranks = thinned ? PointThinning.Ranks(n) : null;
+            xs = ranks is null ? NormalScores.Blom(n) : ranks.Select(r => Statistics.StandardNormal.Quantile((r + 1 - 0.375) / (n + 0.25))).ToArray();
             if (!envelopes.TryGetValue(n, out var envelope))
             {
-                envelope = QqEnvelopes.Simulate(n, options.Seed, options.Draws);
+                envelope = ranks is null ? QqEnvelopes.Simulate(n, options.Seed, options.Draws) : QqEnvelopes.OrderStatistics(n, ranks);
                 envelopes[n] = envelope;
             }
 
-            var (mean, sd) = QqEnvelopes.MeanSd(sorted);
+            if (ranks is not null)
+            {
+                // a cell too large to draw every point: the extremes and evenly spaced ranks between them
+                (sorted, order) = (ranks.Select(r => sorted[r]).ToArray(), ranks.Select(r => order[r]).ToArray());
+            }
+
             if (sd > 0)
             {
                 var (lower, upper) = envelope.Map(mean, sd);

@@ -1,4 +1,5 @@
 using CellCheck.Core.Analysis;
+using CellCheck.Core.Statistics;
 
 namespace CellCheck.Core.Plots;
 
@@ -41,7 +42,12 @@ public static class PooledPlot
             RunOrder(design, report, rows, finite, outliers, notes),
             SpreadLevel(design, report, notes),
         ];
-        if (panels[0].Series.Any(s => s.Role == SeriesRole.Envelope))
+        if (finite.Length > PointThinning.MaxPoints)
+        {
+            notes.Add(PointThinning.Note(finite.Length));
+            notes.Add("The QQ band is the 95% pointwise range of normal order statistics from their exact (Beta) distribution, not simulated.");
+        }
+        else if (panels[0].Series.Any(s => s.Role == SeriesRole.Envelope))
         {
             notes.Add(CellGridPlot.EnvelopeNote(options));
         }
@@ -59,9 +65,15 @@ public static class PooledPlot
 
     private static Panel Qq(ResponseReport report, RowDiagnostics rows, int[] finite, Dictionary<int, OutlierRow> outliers, PlotOptions options)
     {
-        var order = finite.OrderBy(i => rows.Studentized[i]).ThenBy(i => i).ToArray();
-        var sorted = order.Select(i => rows.Studentized[i]).ToArray();
-        var n = sorted.Length;
+        var keys = new double[finite.Length];
+        var order = (int[])finite.Clone();
+        for (var k = 0; k < keys.Length; k++)
+        {
+            keys[k] = rows.Studentized[finite[k]];
+        }
+
+        RadixSort.Sort(keys, order); // stable: ties stay in row order
+        var n = keys.Length;
         var text = AssumptionLines(report.Verdict, AssumptionNames.Normality);
         var mark = Mark(report.Verdict, AssumptionNames.Normality);
         if (n < 3)
@@ -69,22 +81,57 @@ public static class PooledPlot
             return Message("Normal QQ plot of the studentized residuals", "fewer than 3 studentized residuals: nothing to plot", text);
         }
 
-        var xs = NormalScores.Blom(n);
-        var line = QuartileLine.Through(sorted);
-        var envelope = QqEnvelopes.Simulate(n, options.Seed, options.Draws);
-        var (mean, sd) = QqEnvelopes.MeanSd(sorted);
+        var line = QuartileLine.Through(keys);
+        var (mean, sd) = QqEnvelopes.MeanSd(keys);
+        double[] xs, sorted;
+        int[] shown;
+        QqEnvelope envelope;
+        if (n <= PointThinning.MaxPoints)
+        {
+            (xs, sorted, shown) = (NormalScores.Blom(n), keys, order);
+            envelope = QqEnvelopes.Simulate(n, options.Seed, options.Draws);
+        }
+        else
+        {
+            var ranks = PointThinning.Ranks(n);
+            xs = ranks.Select(r => StandardNormal.Quantile((r + 1 - 0.375) / (n + 0.25))).ToArray();
+            sorted = ranks.Select(r => keys[r]).ToArray();
+            shown = ranks.Select(r => order[r]).ToArray();
+            envelope = QqEnvelopes.OrderStatistics(n, ranks);
+        }
+
         var (lower, upper) = envelope.Map(mean, sd);
         var series = new List<Series>
         {
             new BandSeries(SeriesRole.Envelope, xs, lower, upper),
             new StraightLine(SeriesRole.Reference, line.Intercept, line.Slope),
         };
-        series.AddRange(PointsWithHighlights(xs, order, sorted, rows, outliers));
+        series.AddRange(PointsWithHighlights(xs, shown, sorted, rows, outliers));
         var lo = Math.Min(sorted[0], lower.Min());
         var hi = Math.Max(sorted[^1], upper.Max());
         var x = AxisScale.Linear("normal quantile", xs[0], xs[^1]);
         var y = AxisScale.Linear(Studentized, lo, hi, 6);
         return new Panel(x, y, series) { Title = "Normal QQ plot of the studentized residuals", Text = text, Mark = mark };
+    }
+
+    /// <summary>The positions of <paramref name="rowIndex"/> to draw (all, or a thinned set that keeps every outlier).</summary>
+    private static int[] Drawn(int[] rowIndex, double[] ys, RowDiagnostics rows, Dictionary<int, OutlierRow> outliers)
+    {
+        if (ys.Length <= PointThinning.MaxPoints)
+        {
+            return PointThinning.Positions(ys, new HashSet<int>());
+        }
+
+        var always = new HashSet<int>();
+        for (var k = 0; k < rowIndex.Length; k++)
+        {
+            if (outliers.Count > 0 && outliers.ContainsKey(rows.Lines[rowIndex[k]]))
+            {
+                always.Add(k);
+            }
+        }
+
+        return PointThinning.Positions(ys, always);
     }
 
     private static Panel AgainstFitted(ResponseReport report, RowDiagnostics rows, int[] finite, Dictionary<int, OutlierRow> outliers)
@@ -100,10 +147,16 @@ public static class PooledPlot
 
         var xs = finite.Select(i => rows.Fitted[i]).ToArray();
         var ys = finite.Select(i => rows.Studentized[i]).ToArray();
-        var series = new List<Series> { new StraightLine(SeriesRole.Guide, 0, 0) };
-        series.AddRange(PointsWithHighlights(xs, finite, ys, rows, outliers));
         var x = AxisScale.Linear(PlotText.WithUnit("fitted " + report.Response, report.Unit), xs.Min(), xs.Max());
         var y = AxisScale.Linear(Studentized, Math.Min(0, ys.Min()), Math.Max(0, ys.Max()), 6);
+        var drawn = Drawn(finite, ys, rows, outliers);
+        if (drawn.Length < ys.Length)
+        {
+            (xs, ys, finite) = (drawn.Select(k => xs[k]).ToArray(), drawn.Select(k => ys[k]).ToArray(), drawn.Select(k => finite[k]).ToArray());
+        }
+
+        var series = new List<Series> { new StraightLine(SeriesRole.Guide, 0, 0) };
+        series.AddRange(PointsWithHighlights(xs, finite, ys, rows, outliers));
         return new Panel(x, y, series) { Title = title, Text = text, Mark = mark };
     }
 
@@ -117,7 +170,9 @@ public static class PooledPlot
                 + "(or run_order: file when the rows are in run order).", []);
         }
 
-        var placed = finite.Where(i => double.IsFinite(runOrder[i])).OrderBy(i => runOrder[i]).ThenBy(i => i).ToArray();
+        var placed = finite.Where(i => double.IsFinite(runOrder[i])).ToArray();
+        var positions = placed.Select(i => runOrder[i]).ToArray();
+        RadixSort.Sort(positions, placed); // stable: shared run positions stay in row order
         if (placed.Length < finite.Length)
         {
             notes.Add(NumberText.Count(finite.Length - placed.Length) + " row(s) without a run position are not in the run-order panel.");
@@ -145,7 +200,17 @@ public static class PooledPlot
             notes.Add("Blocks are interleaved in run order, so no block boundaries are drawn.");
         }
 
-        series.Add(new LineSeries(SeriesRole.Path, xs, ys));
+        var drawn = Drawn(placed, ys, rows, outliers);
+        if (drawn.Length < ys.Length)
+        {
+            // a path through a thinned sequence would draw steps that are not in the data: points only
+            (xs, ys, placed) = (drawn.Select(k => xs[k]).ToArray(), drawn.Select(k => ys[k]).ToArray(), drawn.Select(k => placed[k]).ToArray());
+        }
+        else
+        {
+            series.Add(new LineSeries(SeriesRole.Path, xs, ys));
+        }
+
         series.AddRange(PointsWithHighlights(xs, placed, ys, rows, outliers));
         return new Panel(x, y, series) { Title = title, Text = text, Mark = Mark(report.Verdict, AssumptionNames.Independence) };
     }

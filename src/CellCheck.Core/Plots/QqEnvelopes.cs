@@ -23,6 +23,43 @@ namespace CellCheck.Core.Plots;
 /// </remarks>
 public static class QqEnvelopes
 {
+    /// <summary>
+    /// The 95% pointwise band of the normal order statistics at the given ranks of n, from their exact distribution
+    /// rather than by simulation (for samples too large to simulate): the i-th smallest of n standard normal values is
+    /// Φ⁻¹(U) with U ~ Beta(i, n − i + 1) (David &amp; Nagaraja 2003, Order Statistics, §2.1), so the band is
+    /// Φ⁻¹ of the Beta's 2.5% and 97.5% quantiles; where both Beta parameters exceed 1000 its normal approximation
+    /// (mean i/(n + 1), variance p(1 − p)/(n + 2)) is used. It does not allow for estimating the mean and SD, which at
+    /// the sizes it is used for (over <see cref="PointThinning.MaxPoints"/> values) changes the band by a negligible amount.
+    /// </summary>
+    public static QqEnvelope OrderStatistics(int n, IReadOnlyList<int> ranks)
+    {
+        ArgumentNullException.ThrowIfNull(ranks);
+        var lower = new double[ranks.Count];
+        var upper = new double[ranks.Count];
+        var z = Statistics.StandardNormal.Quantile(0.975);
+        for (var k = 0; k < ranks.Count; k++)
+        {
+            var a = ranks[k] + 1.0;
+            var b = n - ranks[k] + 0.0;
+            double lo, hi;
+            if (Math.Min(a, b) > 1000)
+            {
+                var p = a / (n + 1.0);
+                var sd = Math.Sqrt(p * (1 - p) / (n + 2.0));
+                (lo, hi) = (p - (z * sd), p + (z * sd));
+            }
+            else
+            {
+                (lo, hi) = (MathNet.Numerics.Distributions.Beta.InvCDF(a, b, 0.025), MathNet.Numerics.Distributions.Beta.InvCDF(a, b, 0.975));
+            }
+
+            lower[k] = Statistics.StandardNormal.Quantile(lo);
+            upper[k] = Statistics.StandardNormal.Quantile(hi);
+        }
+
+        return new QqEnvelope(lower, upper, 0.95);
+    }
+
     /// <summary>Default number of simulated samples.</summary>
     public const int DefaultDraws = 199;
 

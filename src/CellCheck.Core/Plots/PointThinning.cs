@@ -1,0 +1,75 @@
+namespace CellCheck.Core.Plots;
+
+/// <summary>
+/// Which points a pooled panel draws when there are more than <see cref="MaxPoints"/>: a picture of ten million dots
+/// shows no more than one of twenty thousand, and its SVG would not open. Kept are the most extreme points at both
+/// ends and an even, deterministic spread of the rest, so the shape, the tails and every outlier stay visible; the
+/// panel's note says how many points are drawn. Every row stays in diagnostics.csv.
+/// </summary>
+public static class PointThinning
+{
+    /// <summary>Most points a pooled panel draws.</summary>
+    public const int MaxPoints = 20_000;
+
+    /// <summary>Points kept at each end (by rank, or by size of |y|).</summary>
+    public const int Extremes = 1_000;
+
+    /// <summary>Ranks 0..n − 1 to draw of n sorted values: all when n ≤ <see cref="MaxPoints"/>, otherwise the
+    /// <see cref="Extremes"/> lowest and highest and evenly spaced ranks between them.</summary>
+    public static int[] Ranks(int n)
+    {
+        if (n <= MaxPoints)
+        {
+            return Enumerable.Range(0, n).ToArray();
+        }
+
+        var inner = MaxPoints - (2 * Extremes);
+        var ranks = new List<int>(MaxPoints);
+        ranks.AddRange(Enumerable.Range(0, Extremes));
+        var step = (double)(n - (2 * Extremes)) / inner;
+        for (var k = 0; k < inner; k++)
+        {
+            ranks.Add(Extremes + (int)(k * step));
+        }
+
+        ranks.AddRange(Enumerable.Range(n - Extremes, Extremes));
+        return ranks.Distinct().Order().ToArray();
+    }
+
+    /// <summary>Positions 0..ys.Length − 1 to draw: all when few, otherwise the <see cref="Extremes"/> largest |y|, every
+    /// position in <paramref name="always"/>, and every k-th of the others; ascending.</summary>
+    public static int[] Positions(IReadOnlyList<double> ys, ISet<int> always)
+    {
+        ArgumentNullException.ThrowIfNull(ys);
+        ArgumentNullException.ThrowIfNull(always);
+        var n = ys.Count;
+        if (n <= MaxPoints)
+        {
+            return Enumerable.Range(0, n).ToArray();
+        }
+
+        var magnitude = new double[n];
+        var index = new int[n];
+        for (var i = 0; i < n; i++)
+        {
+            magnitude[i] = -Math.Abs(ys[i]);
+            index[i] = i;
+        }
+
+        Array.Sort(magnitude, index);
+        var keep = new HashSet<int>(index.Take(Extremes));
+        keep.UnionWith(always);
+        var stride = (double)n / (MaxPoints - Extremes);
+        for (var k = 0; k < MaxPoints - Extremes; k++)
+        {
+            keep.Add((int)(k * stride));
+        }
+
+        return keep.Order().ToArray();
+    }
+
+    /// <summary>The note under a picture whose pooled panels were thinned.</summary>
+    public static string Note(int total) =>
+        "Pooled panels draw at most " + Analysis.NumberText.Count(MaxPoints) + " of the " + Analysis.NumberText.Count(total)
+        + " points: the most extreme at both ends, every outlier and an even spread of the rest (every row is in diagnostics.csv).";
+}

@@ -404,8 +404,11 @@ public static class PooledPlot
             return "outlier screen: no row named (largest |t| = " + PlotText.Fixed(check.Statistic ?? double.NaN, 2) + ", " + PlotText.PIs("Bonferroni p", check.P ?? double.NaN) + ")";
         }
 
-        return "outlier screen: " + string.Join("; ", report.Model.Outliers.Select(o =>
-            "line " + NumberText.Count(o.Line) + " (t = " + PlotText.Fixed(o.Studentized, 2) + ", " + PlotText.PIs("Bonferroni p", o.PAdjusted) + ")"));
+        const int listed = 5;
+        var outliers = report.Model.Outliers;
+        return "outlier screen: " + string.Join("; ", outliers.Take(listed).Select(o =>
+            "line " + NumberText.Count(o.Line) + " (t = " + PlotText.Fixed(o.Studentized, 2) + ", " + PlotText.PIs("Bonferroni p", o.PAdjusted) + ")"))
+            + (outliers.Count > listed ? "; and " + NumberText.Count(outliers.Count - listed) + " more rows (all in the report)" : string.Empty);
     }
 
     private static PanelMark Mark(Verdict verdict, string assumption) =>

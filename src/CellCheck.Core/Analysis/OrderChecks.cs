@@ -101,16 +101,19 @@ internal static class OrderChecks
         return x is null ? null : DurbinWatson.Test(e, x, DurbinWatsonAlternative.Positive, ExactLimit);
     }
 
-    private static IEnumerable<CheckResult> SignAndTrend(double[] e, double[] t, double alpha)
+    private static List<CheckResult> SignAndTrend(ReadOnlySpan<double> e, ReadOnlySpan<double> t, double alpha)
     {
         var runs = RunsTest.Test(e);
-        yield return runs.IsTestable
-            ? new CheckResult(CheckNames.Runs, runs.Runs, null, runs.P, null, StatusRules.FromP(runs.P, alpha), null)
-            : CheckResults.NotTestable(CheckNames.Runs, runs.Reason!);
         var trend = OrderTrend.Test(e, t);
-        yield return trend.IsTestable
-            ? new CheckResult(CheckNames.Trend, trend.Slope, [trend.Df], trend.P, null, StatusRules.FromP(trend.P, alpha), null)
-            : CheckResults.NotTestable(CheckNames.Trend, trend.Reason!);
+        return
+        [
+            runs.IsTestable
+                ? new CheckResult(CheckNames.Runs, runs.Runs, null, runs.P, null, StatusRules.FromP(runs.P, alpha), null)
+                : CheckResults.NotTestable(CheckNames.Runs, runs.Reason!),
+            trend.IsTestable
+                ? new CheckResult(CheckNames.Trend, trend.Slope, [trend.Df], trend.P, null, StatusRules.FromP(trend.P, alpha), null)
+                : CheckResults.NotTestable(CheckNames.Trend, trend.Reason!),
+        ];
     }
 
     private static List<BlockOrderResult> ByBlock(DesignData data, CellPartition partition, int[] use, double[] e, double[] t, double alpha)
@@ -148,10 +151,10 @@ internal static class OrderChecks
                 continue;
             }
 
-            var el = eb.AsSpan(counts[level], length).ToArray();
-            var tl = tb.AsSpan(counts[level], length).ToArray();
+            var el = eb.AsSpan(counts[level], length);
+            var tl = tb.AsSpan(counts[level], length);
             result.Add(new BlockOrderResult(block.Levels[level], length, length > 1 ? DurbinWatson.Statistic(el) : null,
-                length > 1 ? LagCorrelation.Lag1(el) : null, SignAndTrend(el, tl, alpha).ToList()));
+                length > 1 ? LagCorrelation.Lag1(el) : null, SignAndTrend(el, tl, alpha)));
         }
 
         return result;

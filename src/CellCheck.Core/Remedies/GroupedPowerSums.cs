@@ -27,6 +27,9 @@ internal sealed class GroupedPowerSums
     /// <summary>Series terms summed per cell.</summary>
     public const int Terms = 30;
 
+    /// <summary>1/k for k ≤ Terms + 1 (a multiplication in the series loop instead of a division).</summary>
+    private static readonly double[] Reciprocal = [.. Enumerable.Range(0, Terms + 2).Select(k => k == 0 ? 0 : 1.0 / k)];
+
     /// <summary>Groups per parallel work item.</summary>
     private const int Chunk = 2048;
 
@@ -175,7 +178,7 @@ internal sealed class GroupedPowerSums
                     break;
                 }
 
-                bound *= x / (k + 1);
+                bound *= x * Reciprocal[k + 1];
             }
 
             previous = power;

@@ -31,8 +31,7 @@ public static class ResponseAnalyzer
         ResolutionSummary resolution = null!;
         var calibration = Calibrator.Calibrate(residuals.NullPlan, options.Alpha, options.Simulation);
         (double, double)? primary = null;
-        // no more groups at once than cores: each holds copies of the residuals, so more at once only adds memory
-        Parallel.Invoke(new ParallelOptions { MaxDegreeOfParallelism = Environment.ProcessorCount },
+        Parallel.Invoke(
             () => primary = calibration.MonteCarlo ? PrimaryDecisions.Statistics(partition, residuals, calibration) : null,
             () =>
             {

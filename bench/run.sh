@@ -8,6 +8,8 @@
 #   BENCH_DIR=DIR    scratch folder for data and reports (default /tmp/cellcheck-bench; existing data are reused)
 #   RESULTS=FILE     where the Markdown table is also written (default bench/results/latest.md)
 #   TIMEOUT=SECONDS  limit for each timed tool (default 3600); a tool that runs over is reported as "timeout"
+#   REPEAT=N         rounds per file (default 1); each round runs every tool once, in turn, and the table gives the
+#                    median seconds and the largest peak memory over the rounds (a shared machine is noisy)
 set -euo pipefail
 
 [[ -f CellCheck.sln && -d bench/reference ]] || { echo "run bench/run.sh from the repository root" >&2; exit 2; }
@@ -17,6 +19,8 @@ DEFAULT_CELLS=${CELLS:-10000}
 BENCH_DIR=${BENCH_DIR:-/tmp/cellcheck-bench}
 RESULTS=${RESULTS:-bench/results/latest.md}
 TIMEOUT=${TIMEOUT:-3600}
+REPEAT=${REPEAT:-1}
+[[ $REPEAT =~ ^[1-9][0-9]*$ ]] || { echo "REPEAT must be a positive whole number" >&2; exit 2; }
 RUNS=("$@")
 (( ${#RUNS[@]} )) || RUNS=(1000000:10000 10000000:10000 1000000:1000)
 [[ $RESULTS == *.md ]] || { echo "RESULTS must name a .md file (the benchmark never writes over its inputs)" >&2; exit 2; }
@@ -74,6 +78,14 @@ measure() {
 
 ratio() { awk -v a="$1" -v b="$2" 'BEGIN { if (a + 0 > 0 && b + 0 > 0) printf "%.1f", a / b; else printf "-" }'; }
 
+# median VALUES...: the median of numbers (a word such as "failed" wins if any round gave one); largest VALUES...: the largest.
+median() {
+  local v
+  for v in "$@"; do [[ $v =~ ^[0-9.]+$ ]] || { echo "$v"; return; }; done
+  printf '%s\n' "$@" | sort -g | awk '{ a[NR] = $1 } END { if (NR % 2) print a[(NR + 1) / 2]; else printf "%.3f\n", (a[NR / 2] + a[NR / 2 + 1]) / 2 }'
+}
+largest() { printf '%s\n' "$@" | awk '$1 ~ /^[0-9]+$/ { if ($1 > m) m = $1; seen = 1 } END { if (seen) print m; else print "-" }'; }
+
 mkdir -p "$BENCH_DIR/out"
 OUT=$BENCH_DIR/out
 ROWS_OUT=()
@@ -101,24 +113,33 @@ for run in "${RUNS[@]}"; do
   echo "timing $name ($rows rows, $cells cells) ..."
   cat "$csv" >/dev/null   # read it once, so every tool starts from the page cache
 
-  # The parse floor reports its own Sep-pass time, process start excluded; check it saw every row.
-  measure "$name.floor" 0 "$BENCH" floor "$csv"
-  floor=$(awk '{ print $1 }' "$OUT/$name.floor.log")
-  grep -q " $rows rows," "$OUT/$name.floor.log" || { echo "  floor did not count $rows rows" >&2; floor=failed; }
+  floors=() ccs=() ccm=() rs=() rm=() pys=() pym=()
+  for ((round = 1; round <= REPEAT; round++)); do
+    # The parse floor reports its own Sep-pass time, process start excluded; check it saw every row.
+    measure "$name.floor.$round" 0 "$BENCH" floor "$csv"
+    f=$(awk '{ print $1 }' "$OUT/$name.floor.$round.log")
+    grep -q " $rows rows," "$OUT/$name.floor.$round.log" || { echo "  floor did not count $rows rows" >&2; f=failed; }
+    floors+=("$f")
 
-  measure "$name.cellcheck" "0 1" "$CELLCHECK" check "$BENCH_DIR/$name.yaml" --json "$OUT/$name.report.json" --quiet
-  cc_s=$SECONDS_ cc_mb=$MB_
+    measure "$name.cellcheck.$round" "0 1" "$CELLCHECK" check "$BENCH_DIR/$name.yaml" --json "$OUT/$name.report.json" --quiet
+    ccs+=("$SECONDS_") ccm+=("$MB_")
 
+    if [[ $HAVE_R == yes ]]; then
+      measure "$name.R.$round" 0 Rscript bench/reference/check.R "$csv"
+      rs+=("$SECONDS_") rm+=("$MB_")
+    fi
+    if [[ $HAVE_PY == yes ]]; then
+      measure "$name.scipy.$round" 0 "$PYTHON" bench/reference/check.py "$csv"
+      pys+=("$SECONDS_") pym+=("$MB_")
+    fi
+  done
+
+  floor=$(median "${floors[@]}")
+  cc_s=$(median "${ccs[@]}") cc_mb=$(largest "${ccm[@]}")
   r_s=skipped r_mb=-
-  if [[ $HAVE_R == yes ]]; then
-    measure "$name.R" 0 Rscript bench/reference/check.R "$csv"
-    r_s=$SECONDS_ r_mb=$MB_
-  fi
+  [[ $HAVE_R == yes ]] && { r_s=$(median "${rs[@]}"); r_mb=$(largest "${rm[@]}"); }
   py_s=skipped py_mb=-
-  if [[ $HAVE_PY == yes ]]; then
-    measure "$name.scipy" 0 "$PYTHON" bench/reference/check.py "$csv"
-    py_s=$SECONDS_ py_mb=$MB_
-  fi
+  [[ $HAVE_PY == yes ]] && { py_s=$(median "${pys[@]}"); py_mb=$(largest "${pym[@]}"); }
 
   ROWS_OUT+=("| $name.csv | $rows | $cells | $floor | $cc_s | $cc_mb | $r_s | $r_mb | $py_s | $py_mb | $(ratio "$r_s" "$cc_s") | $(ratio "$py_s" "$cc_s") | $(ratio "$cc_s" "$floor") |")
 done
@@ -133,7 +154,8 @@ report() {
   echo "| --- | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: | ---: |"
   printf '%s\n' "${ROWS_OUT[@]}"
   echo
-  echo "Seconds are wall time of the whole process (start-up included), except the floor: the Sep pass alone."
+  echo "Seconds are wall time of the whole process (start-up included), except the floor: the Sep pass alone;"
+  echo "medians over $REPEAT round(s), peak memory the largest over the rounds."
   echo "The reference scripts ignore the day block and run fewer checks than CellCheck (doing less work; see bench/README.md)."
 }
 mkdir -p "$(dirname "$RESULTS")"

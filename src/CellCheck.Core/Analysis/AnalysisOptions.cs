@@ -16,4 +16,8 @@ public sealed record AnalysisOptions(double Alpha = 0.05, AdjustMethod Adjust = 
 
     /// <summary>Simulated data sets per scenario for the sensitivity of the single checks (replicates section).</summary>
     public int SensitivityDraws { get; init; } = 400;
+
+    /// <summary>Fit the transformation advice's likelihoods alongside the checks of a large response (the remedy step
+    /// then reuses them); off for a re-check of a transformed response, which gives no advice of its own.</summary>
+    public bool EarlyRemedy { get; init; } = true;
 }

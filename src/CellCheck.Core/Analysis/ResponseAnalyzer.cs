@@ -10,6 +10,9 @@ namespace CellCheck.Core.Analysis;
 /// <summary>Runs every check for one response: cells, census, model residuals, within-cell, pooled, spread and model checks, verdict.</summary>
 public static class ResponseAnalyzer
 {
+    /// <summary>Above this many rows the transformation advice's likelihood fits run alongside the checks.</summary>
+    public const int EarlyRemedyRows = 100_000;
+
     /// <summary>Analyses response <paramref name="response"/> of <paramref name="data"/> under <paramref name="spec"/>
     /// (default: the full factorial in the factors, with additive blocks).</summary>
     public static ResponseReport Analyze(DesignData data, int response, AnalysisOptions options, ModelSpec? spec = null)
@@ -31,7 +34,10 @@ public static class ResponseAnalyzer
         ResolutionSummary resolution = null!;
         var calibration = Calibrator.Calibrate(residuals.NullPlan, options.Alpha, options.Simulation);
         (double, double)? primary = null;
+        Remedies.RemedyFits? remedyFits = null;
+        var early = options.EarlyRemedy && partition.Values.Count > EarlyRemedyRows && residuals.Diagnostics is not null;
         Parallel.Invoke(
+            () => remedyFits = early ? Remedies.RemedyFits.Compute(data, spec, partition, residuals.Diagnostics!.Model, column, 0, wantsYeoJohnson: false) : null,
             () => primary = calibration.MonteCarlo ? PrimaryDecisions.Statistics(partition, residuals, calibration) : null,
             () =>
             {
@@ -52,6 +58,7 @@ public static class ResponseAnalyzer
             Replicates = Planning.ReplicatesAssessor.Assess(census, residuals, options),
             Rows = Rows(data, partition, residuals, column.Origin),
             Partition = partition,
+            RemedyFits = remedyFits,
         };
     }
 

@@ -35,4 +35,7 @@ public sealed record ResponseReport(
 
     /// <summary>The cells of this analysis, kept for the remedy step so it need not partition the rows again (not reported).</summary>
     internal Cells.CellPartition? Partition { get; init; }
+
+    /// <summary>The transformation advice's likelihood fits at no shift, when they were run alongside the checks (not reported).</summary>
+    internal Remedies.RemedyFits? RemedyFits { get; init; }
 }

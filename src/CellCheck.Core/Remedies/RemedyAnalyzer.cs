@@ -24,19 +24,15 @@ public static class RemedyAnalyzer
         var column = data.Responses[response];
         var shift = request?.Shift ?? 0;
         var partition = before.Partition ?? CellPartition.Build(data.Factors, column.Values, data.Blocks);
-        var y = partition.Values.Values.Select(v => column.Origin + shift + v).ToArray();
-        var rss = y.Length == 0 ? null : Model(data, spec, partition, before.Model.Info);
-        var model = before.Model.Info.Name;
-        var nonPositive = y.Count(v => !(v > 0));
-        var degenerate = rss is null || rss.ResidualDf < 1 ? RemedyReason.NoResidualDf : rss.Of(y) == 0 ? RemedyReason.ZeroSpread : null;
-        var boxCoxReason = degenerate ?? (nonPositive > 0 ? RemedyReason.NonPositiveValues : null);
-        var boxCox = boxCoxReason is null ? BoxCox.Fit(rss!, y, model, shift) : null;
         var wantsYeoJohnson = request is { Family: PowerFamily.YeoJohnson, Power: null };
-        var yeoJohnson = degenerate is null && (nonPositive > 0 || wantsYeoJohnson) ? YeoJohnson.Fit(rss!, y, model, shift) : null;
+        var fits = before.RemedyFits is { } early && early.Serves(shift, wantsYeoJohnson)
+            ? early
+            : RemedyFits.Compute(data, spec, partition, before.Model.Info, column, shift, wantsYeoJohnson);
+        var (nonPositive, boxCoxReason, boxCox, yeoJohnson) = (fits.NonPositive, fits.BoxCoxReason, fits.BoxCox, fits.YeoJohnson);
         var spreadLevel = SpreadLevel.Fit(before.Cells.Select(c => c.N).ToArray(), before.Cells.Select(c => c.Mean + shift).ToArray(), before.Cells.Select(c => c.Sd).ToArray());
         var recommendedFit = boxCox ?? yeoJohnson;
         var recommended = recommendedFit is null ? null : PowerLadder.Recommend(recommendedFit);
-        var notes = RemedyNotes.Before(boxCox, yeoJohnson, recommended, nonPositive, y.DefaultIfEmpty(double.NaN).Min(), y.DefaultIfEmpty(double.NaN).Max(), shift, before.Model.Outliers.Count);
+        var notes = RemedyNotes.Before(boxCox, yeoJohnson, recommended, nonPositive, fits.Min, fits.Max, shift, before.Model.Outliers.Count);
         var (choice, notApplied) = Choose(request, recommended, yeoJohnson, nonPositive);
         ResponseReport? after = null;
         double? slopeAfter = null;
@@ -54,7 +50,7 @@ public static class RemedyAnalyzer
                 RunOrder = data.RunOrder,
                 RunOrderColumn = data.RunOrderColumn,
             };
-            after = ResponseAnalyzer.Analyze(afterData, 0, options, spec);
+            after = ResponseAnalyzer.Analyze(afterData, 0, options with { EarlyRemedy = false }, spec);
             slopeAfter = SpreadLevel.Fit(after.Cells.Select(c => c.N).ToArray(), before.Cells.Select(c => c.Mean + shift).ToArray(), after.Cells.Select(c => c.Sd).ToArray()).Slope;
             comparison = RemedyComparison.Build(before, after);
             notes.Add("Every check was re-run on " + choice.Formula(column.Name) + ".");
@@ -98,7 +94,7 @@ public static class RemedyAnalyzer
 
     /// <summary>The residual sum of squares of the declared model for the partition's rows: about the cell means for
     /// the full factorial in categorical factors without blocks, otherwise by QR of the estimable design columns.</summary>
-    private static IResidualSumOfSquares Model(DesignData data, ModelSpec spec, CellPartition partition, ModelInfo fitted)
+    internal static IResidualSumOfSquares Model(DesignData data, ModelSpec spec, CellPartition partition, ModelInfo fitted)
     {
         if (fitted.Absorbed && SettingRss.Build(partition, data.Blocks) is { } settings)
         {

@@ -46,7 +46,14 @@ internal static class OrderChecks
         }
 
         var checks = new List<CheckResult>();
-        var dw = DurbinWatsonOf(partition, residuals, use, e);
+        // the three parts read the same run-ordered residuals and write only their own results
+        DurbinWatsonResult? dw = null;
+        List<CheckResult> signAndTrend = null!;
+        List<BlockOrderResult> byBlock = null!;
+        Parallel.Invoke(
+            () => dw = DurbinWatsonOf(partition, residuals, use, e),
+            () => signAndTrend = SignAndTrend(e, t, alpha),
+            () => byBlock = data.Blocks.Count == 0 ? [] : ByBlock(data, partition, use, e, t, alpha));
         if (dw is null)
         {
             checks.Add(CheckResults.NotTestable(CheckNames.DurbinWatson, NotTestableReason.TooManyValues));
@@ -59,8 +66,7 @@ internal static class OrderChecks
                 : CheckResults.NotTestable(CheckNames.DurbinWatson, dw.Reason!));
         }
 
-        checks.AddRange(SignAndTrend(e, t, alpha));
-        var byBlock = data.Blocks.Count == 0 ? [] : ByBlock(data, partition, use, e, t, alpha);
+        checks.AddRange(signAndTrend);
         return new OrderResult(data.RunOrderColumn, e.Length, checks, e.Length > 1 ? LagCorrelation.Lag1(e) : null,
             dw?.ExpectedD, dw?.Method, byBlock, notes);
     }

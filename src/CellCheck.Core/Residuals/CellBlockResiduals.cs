@@ -34,15 +34,24 @@ public sealed class CellBlockResiduals(IReadOnlyList<FactorColumn> blocks, Model
         fit.Residualize(y, residuals);
         var fitted = new double[n];
         var leverage = new double[n];
-        var rss = 0.0;
-        for (var c = 0; c < partition.CellCount; c++)
+        var cellRss = new double[partition.CellCount];
+        // cells in parallel, each into its own slots; the sum of squares is then added in cell order (deterministic)
+        Parallel.For(0, partition.CellCount, c =>
         {
+            var sum = 0.0;
             for (var i = partition.Values.Starts[c]; i < partition.Values.Starts[c + 1]; i++)
             {
                 fitted[i] = y[i] - residuals[i];
                 leverage[i] = fit.Leverage(c, i);
-                rss += residuals[i] * residuals[i];
+                sum += residuals[i] * residuals[i];
             }
+
+            cellRss[c] = sum;
+        });
+        var rss = 0.0;
+        foreach (var part in cellRss)
+        {
+            rss += part;
         }
 
         var df = n - fit.Rank;

@@ -100,186 +100,108 @@ public static class CellBlockDurbinWatson
         return new DurbinWatsonResult(d, pValue, expected, variance, OrderMethods.NormalApproximation, alternative);
     }
 
-    /// <summary>
-    /// G = ZᵀAZ and K = WᵀM_cW with W = AZ, without forming Z: z_t = x_t − m_{c_t} splits every sum into a sparse part
-    /// (the block indicators x) and a part in the cell means m, which is gathered per cell and multiplied out once:
-    /// O(n·(B² + p)) for the run sequence plus O(cells·p²).
-    /// </summary>
+    /// <summary>G = ZᵀAZ = Σ (z_t − z_{t−1})(z_t − z_{t−1})ᵀ and K = WᵀM_cW with W = AZ, over the run sequence: each z_t
+    /// formed on the fly from the cell means and the block indicators, two symmetric rank-one updates per position
+    /// (vectorised), the sequence in two halves in parallel, added in a fixed order. (Splitting z into its sparse and
+    /// cell-mean parts needs fewer operations but scatters them over every cell's accumulators, and ran slower.)</summary>
     private static (double[,] G, double[,] K) Accumulate(int[] cell, int cells, int[][] dummy, int p, double[] mean, double[] size)
     {
         var n = cell.Length;
-        var parts = new Partial[2];
-        Parallel.For(0, 2, h => parts[h] = Range(cell, cells, dummy, p, mean, h * n / 2, (h + 1) * n / 2));
-        var (first, second) = (parts[0], parts[1]);
+        var halves = new (double[] G, double[] WW, double[] CellW)[2];
+        Parallel.For(0, 2, h => halves[h] = Range(cell, cells, dummy, p, mean, h * n / 2, (h + 1) * n / 2));
         var g = new double[p, p];
         var k = new double[p, p];
+        var cellW = halves[0].CellW;
+        for (var i = 0; i < cellW.Length; i++)
+        {
+            cellW[i] += halves[1].CellW[i];
+        }
+
         for (var a = 0; a < p; a++)
         {
             for (var b = 0; b < p; b++)
             {
-                g[a, b] = first.G[(a * p) + b] + second.G[(a * p) + b];
-                k[a, b] = first.K[(a * p) + b] + second.K[(a * p) + b];
-            }
-        }
-
-        var stride = Fields * p;
-        for (var i = 0; i < first.Cells.Length; i++)
-        {
-            first.Cells[i] += second.Cells[i];
-        }
-
-        for (var c = 0; c < cells; c++)
-        {
-            first.Count[c] += second.Count[c];
-        }
-
-        var acc = first.Cells;
-        for (var a = 0; a < p; a++)
-        {
-            for (var b = 0; b < p; b++)
-            {
-                double deltaMu = 0, muDelta = 0, muMu = 0, alphaBeta = 0, betaAlpha = 0, betaBeta = 0, between = 0;
+                var between = 0.0;
                 for (var c = 0; c < cells; c++)
                 {
-                    var o = c * stride;
-                    var ma = mean[(c * p) + a];
-                    var mb = mean[(c * p) + b];
-                    deltaMu += acc[o + (R * p) + a] * mb;
-                    muDelta += ma * acc[o + (R * p) + b];
-                    muMu += (first.Count[c] * ma * mb) - (ma * acc[o + (Partner * p) + b]);
-                    alphaBeta += acc[o + (R2 * p) + a] * mb;
-                    betaAlpha += ma * acc[o + (R2 * p) + b];
-                    betaBeta += ma * acc[o + (V * p) + b];
-                    if (size[c] > 0)
-                    {
-                        var sa = acc[o + (SAlpha * p) + a] - acc[o + (SBeta * p) + a];
-                        var sb = acc[o + (SAlpha * p) + b] - acc[o + (SBeta * p) + b];
-                        between += sa * sb / size[c];
-                    }
+                    between += size[c] > 0 ? cellW[(c * p) + a] * cellW[(c * p) + b] / size[c] : 0;
                 }
 
-                g[a, b] += muMu - deltaMu - muDelta;
-                k[a, b] += betaBeta - alphaBeta - betaAlpha - between;
+                var (lo, hi) = a <= b ? (a, b) : (b, a); // accumulated in the upper triangle
+                g[a, b] = halves[0].G[(lo * p) + hi] + halves[1].G[(lo * p) + hi];
+                k[a, b] = halves[0].WW[(lo * p) + hi] + halves[1].WW[(lo * p) + hi] - between;
             }
         }
 
         return (g, k);
     }
 
-    // per-cell accumulators, interleaved so that one cell's fields share cache lines
-    private const int R = 0, Partner = 1, R2 = 2, V = 3, SAlpha = 4, SBeta = 5, Fields = 6;
-
-    private sealed record Partial(double[] G, double[] K, double[] Cells, double[] Count);
-
-    /// <summary>The terms of positions from .. to − 1 (neighbours are read across the range's ends).</summary>
-    private static Partial Range(int[] cell, int cells, int[][] dummy, int p, double[] mean, int from, int to)
+    private static (double[] G, double[] WW, double[] CellW) Range(int[] cell, int cells, int[][] dummy, int p, double[] mean, int from, int to)
     {
         var n = cell.Length;
-        var stride = Fields * p;
         var g = new double[p * p];
-        var k = new double[p * p];
-        var acc = new double[cells * stride];
-        var count = new double[cells];
-        var beta = new double[p];
-        Span<int> idx = stackalloc int[3 * dummy.Length];
-        Span<double> val = stackalloc double[3 * dummy.Length];
-        for (var t = from; t < to; t++)
+        var ww = new double[p * p];
+        var cellW = new double[cells * p];
+        var previous = new double[p];
+        var current = new double[p];
+        var next = new double[p];
+        var d = new double[p];
+        var w = new double[p];
+        if (from > 0)
         {
-            var c = cell[t];
-            var oc = c * stride;
-            if (t > 0)
-            {
-                // G: d_t = δ_t − μ_t with δ_t = x_t − x_{t−1}, μ_t = m_c − m_b
-                var b = cell[t - 1];
-                var ob = b * stride;
-                var m = Put(dummy, t, 1, idx, val, 0);
-                m = Put(dummy, t - 1, -1, idx, val, m);
-                for (var i = 0; i < m; i++)
-                {
-                    for (var j = 0; j < m; j++)
-                    {
-                        g[(idx[i] * p) + idx[j]] += val[i] * val[j];
-                    }
-
-                    acc[oc + (R * p) + idx[i]] += val[i];
-                    acc[ob + (R * p) + idx[i]] -= val[i];
-                }
-
-                count[c]++;
-                count[b]++;
-                for (var a = 0; a < p; a++)
-                {
-                    acc[oc + (Partner * p) + a] += mean[(b * p) + a];
-                    acc[ob + (Partner * p) + a] += mean[(c * p) + a];
-                }
-            }
-
-            // K: w_t = α_t − β_t, α_t = deg·x_t − x_{t−1} − x_{t+1}, β_t = deg·m_c − m_{c−} − m_{c+}
-            var degree = (t > 0 ? 1 : 0) + (t + 1 < n ? 1 : 0);
-            var previous = t > 0 ? cell[t - 1] * stride : -1;
-            var next = t + 1 < n ? cell[t + 1] * stride : -1;
-            var terms = Put(dummy, t, degree, idx, val, 0);
-            terms = t > 0 ? Put(dummy, t - 1, -1, idx, val, terms) : terms;
-            terms = t + 1 < n ? Put(dummy, t + 1, -1, idx, val, terms) : terms;
-            for (var a = 0; a < p; a++)
-            {
-                beta[a] = (degree * mean[(c * p) + a]) - (t > 0 ? mean[(cell[t - 1] * p) + a] : 0) - (t + 1 < n ? mean[(cell[t + 1] * p) + a] : 0);
-                acc[oc + (SBeta * p) + a] += beta[a];
-                acc[oc + (V * p) + a] += degree * beta[a];
-            }
-
-            if (previous >= 0)
-            {
-                for (var a = 0; a < p; a++)
-                {
-                    acc[previous + (V * p) + a] -= beta[a];
-                }
-            }
-
-            if (next >= 0)
-            {
-                for (var a = 0; a < p; a++)
-                {
-                    acc[next + (V * p) + a] -= beta[a];
-                }
-            }
-
-            for (var i = 0; i < terms; i++)
-            {
-                for (var j = 0; j < terms; j++)
-                {
-                    k[(idx[i] * p) + idx[j]] += val[i] * val[j];
-                }
-
-                acc[oc + (SAlpha * p) + idx[i]] += val[i];
-                acc[oc + (R2 * p) + idx[i]] += degree * val[i];
-                if (previous >= 0)
-                {
-                    acc[previous + (R2 * p) + idx[i]] -= val[i];
-                }
-
-                if (next >= 0)
-                {
-                    acc[next + (R2 * p) + idx[i]] -= val[i];
-                }
-            }
+            Centred(from - 1, cell, dummy, p, mean, previous);
         }
 
-        return new Partial(g, k, acc, count);
+        if (from < to)
+        {
+            Centred(from, cell, dummy, p, mean, current);
+        }
+
+        for (var t = from; t < to; t++)
+        {
+            if (t + 1 < n)
+            {
+                Centred(t + 1, cell, dummy, p, mean, next);
+            }
+
+            var degree = (t > 0 ? 1 : 0) + (t + 1 < n ? 1 : 0);
+            for (var a = 0; a < p; a++)
+            {
+                d[a] = current[a] - previous[a];
+                w[a] = (degree * current[a]) - (t > 0 ? previous[a] : 0) - (t + 1 < n ? next[a] : 0);
+                cellW[(cell[t] * p) + a] += w[a];
+            }
+
+            // upper triangles only (both matrices are symmetric): row a from column a on
+            for (var a = 0; a < p; a++)
+            {
+                if (t > 0)
+                {
+                    VectorKernels.AddScaled(g.AsSpan((a * p) + a, p - a), d[a], d.AsSpan(a));
+                }
+
+                VectorKernels.AddScaled(ww.AsSpan((a * p) + a, p - a), w[a], w.AsSpan(a));
+            }
+
+            (previous, current, next) = (current, next, previous);
+        }
+
+        return (g, ww, cellW);
     }
 
-    /// <summary>Appends the block indicators of position t with weight <paramref name="weight"/> to the sparse list.</summary>
-    private static int Put(int[][] dummy, int t, double weight, Span<int> idx, Span<double> val, int m)
+    private static void Centred(int t, int[] cell, int[][] dummy, int p, double[] mean, double[] z)
     {
+        for (var a = 0; a < p; a++)
+        {
+            z[a] = -mean[(cell[t] * p) + a];
+        }
+
         foreach (var column in dummy)
         {
             if (column[t] >= 0)
             {
-                idx[m] = column[t];
-                val[m++] = weight;
+                z[column[t]] += 1;
             }
         }
-
-        return m;
     }
 }

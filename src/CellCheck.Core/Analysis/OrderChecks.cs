@@ -128,9 +128,11 @@ internal static class OrderChecks
         var block = data.Blocks[0];
         var levels = block.Levels.Count;
         var counts = new int[levels + 1];
-        foreach (var i in use)
+        var code = new int[use.Length]; // each used row's level, looked up once (two indirections into large arrays)
+        for (var k = 0; k < use.Length; k++)
         {
-            counts[block.Codes[partition.RowOrder[i]] + 1]++;
+            code[k] = block.Codes[partition.RowOrder[use[k]]];
+            counts[code[k] + 1]++;
         }
 
         for (var level = 0; level < levels; level++)
@@ -144,7 +146,7 @@ internal static class OrderChecks
         var next = (int[])counts.Clone();
         for (var k = 0; k < use.Length; k++)
         {
-            var at = next[block.Codes[partition.RowOrder[use[k]]]]++;
+            var at = next[code[k]]++;
             eb[at] = e[k];
             tb[at] = t[k];
         }

@@ -20,6 +20,9 @@ public static class PooledPlot
 
     private const string CellMeans = "cell-means";
 
+    /// <summary>Most flagged rows named by a label in one panel.</summary>
+    private const int MaxLabels = 10;
+
     public static PlotModel Build(DesignSummary design, ResponseReport report, PlotOptions options)
     {
         ArgumentNullException.ThrowIfNull(design);
@@ -363,9 +366,12 @@ public static class PooledPlot
         yield return new PointSeries(SeriesRole.Points, xs.Where((_, k) => !flagged[k]).ToArray(), ys.Where((_, k) => !flagged[k]).ToArray());
         if (flagged.Any(f => f))
         {
-            yield return new PointSeries(SeriesRole.Highlight, xs.Where((_, k) => flagged[k]).ToArray(), ys.Where((_, k) => flagged[k]).ToArray())
+            // label the most extreme flagged rows only: dozens of labels cover each other (all rows are in the report)
+            var fy = ys.Where((_, k) => flagged[k]).ToArray();
+            var labelled = fy.Length <= MaxLabels ? 0.0 : fy.Select(Math.Abs).OrderDescending().ElementAt(MaxLabels - 1);
+            yield return new PointSeries(SeriesRole.Highlight, xs.Where((_, k) => flagged[k]).ToArray(), fy)
             {
-                Labels = rowIndex.Where((_, k) => flagged[k]).Select(i => (string?)("line " + NumberText.Count(rows.Lines[i]))).ToArray(),
+                Labels = rowIndex.Where((_, k) => flagged[k]).Select((i, j) => Math.Abs(fy[j]) >= labelled ? (string?)("line " + NumberText.Count(rows.Lines[i])) : null).ToArray(),
             };
         }
     }

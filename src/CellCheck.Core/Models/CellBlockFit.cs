@@ -143,13 +143,15 @@ internal sealed class CellBlockFit
         }
 
         var matrix = Matrix<double>.Build.DenseOfArray(c2);
-        var eigen = matrix.Evd(Symmetricity.Symmetric).EigenValues.Select(v => v.Real).ToArray();
-        if (!(eigen.Min() > 1e-9 * Math.Max(1.0, eigen.Max())))
-        {
-            return null;
-        }
+        return Estimable(matrix) ? new CellBlockFit(starts, dummy, weights, p, cellWeight, cellMeanX, matrix.Inverse().ToArray()) : null;
+    }
 
-        return new CellBlockFit(starts, dummy, weights, p, cellWeight, cellMeanX, matrix.Inverse().ToArray());
+    /// <summary>True when the reduced normal-equation matrix C (symmetric, p ≥ 1) is safely positive definite: its
+    /// smallest eigenvalue above 1e-9 of its largest (or of 1), so every block contrast is estimable apart from the cells.</summary>
+    public static bool Estimable(Matrix<double> c)
+    {
+        var eigen = c.Evd(Symmetricity.Symmetric).EigenValues.Select(v => v.Real).ToArray();
+        return eigen.Min() > 1e-9 * Math.Max(1.0, eigen.Max());
     }
 
     /// <summary>Residuals of <paramref name="y"/> (one value per unit, in unit order) on cells plus blocks.</summary>

@@ -20,10 +20,7 @@ internal static class CompensatedProducts
             double hi = 0, lo = 0;
             for (var j = 0; j < columns.Length; j++)
             {
-                var product = x[i, columns[j]] * b[j];
-                var productError = Math.FusedMultiplyAdd(x[i, columns[j]], b[j], -product);
-                (hi, var sumError) = TwoSum(hi, product);
-                lo += sumError + productError;
+                AddProduct(ref hi, ref lo, x[i, columns[j]], b[j]);
             }
 
             fitted[i] = hi + lo;
@@ -41,10 +38,7 @@ internal static class CompensatedProducts
             var (hi, lo) = TwoSum(y[i], -r[i]);
             for (var j = 0; j < columns.Length; j++)
             {
-                var product = x[i, columns[j]] * b[j];
-                var productError = Math.FusedMultiplyAdd(x[i, columns[j]], b[j], -product);
-                (hi, var sumError) = TwoSum(hi, -product);
-                lo += sumError - productError;
+                AddProduct(ref hi, ref lo, x[i, columns[j]], -b[j]); // negating a factor negates product and error exactly
             }
 
             f[i] = hi + lo;
@@ -59,10 +53,7 @@ internal static class CompensatedProducts
             double hi = 0, lo = 0;
             for (var i = 0; i < r.Length; i++)
             {
-                var product = x[i, columns[j]] * r[i];
-                var productError = Math.FusedMultiplyAdd(x[i, columns[j]], r[i], -product);
-                (hi, var sumError) = TwoSum(hi, product);
-                lo += sumError + productError;
+                AddProduct(ref hi, ref lo, x[i, columns[j]], r[i]);
             }
 
             g[j] = hi + lo;
@@ -75,13 +66,19 @@ internal static class CompensatedProducts
         double hi = 0, lo = 0;
         foreach (var value in v)
         {
-            var square = value * value;
-            var squareError = Math.FusedMultiplyAdd(value, value, -square);
-            (hi, var sumError) = TwoSum(hi, square);
-            lo += sumError + squareError;
+            AddProduct(ref hi, ref lo, value, value);
         }
 
         return hi + lo;
+    }
+
+    /// <summary>(hi, lo) += a·b: the product split exactly by a fused multiply-add, the sum by TwoSum.</summary>
+    private static void AddProduct(ref double hi, ref double lo, double a, double b)
+    {
+        var product = a * b;
+        var productError = Math.FusedMultiplyAdd(a, b, -product);
+        (hi, var sumError) = TwoSum(hi, product);
+        lo += sumError + productError;
     }
 
     /// <summary>Knuth's TwoSum: s = fl(a + b) and the exact error e with a + b = s + e.</summary>

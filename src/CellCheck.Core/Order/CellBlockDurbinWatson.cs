@@ -1,4 +1,4 @@
-using CellCheck.Core.Statistics;
+using CellCheck.Core.Models;
 using MathNet.Numerics.LinearAlgebra;
 
 namespace CellCheck.Core.Order;
@@ -66,10 +66,14 @@ public static class CellBlockDurbinWatson
             }
         }
 
+        if (p == 0)
+        {
+            return GroupedDurbinWatson.Test(residuals, cell, cells, alternative);
+        }
+
         var cm = Matrix<double>.Build.DenseOfArray(c);
-        var eigen = cm.Evd(Symmetricity.Symmetric).EigenValues.Select(v => v.Real).ToArray();
         var rank = size.Count(v => v > 0) + p;
-        if (n < rank + 2 || !(eigen.Min() > 1e-9 * Math.Max(1.0, eigen.Max())))
+        if (n < rank + 2 || !CellBlockFit.Estimable(cm))
         {
             return null;
         }
@@ -83,21 +87,7 @@ public static class CellBlockDurbinWatson
         var traceMA2 = traceCell2 - (2 * (inverse * Matrix<double>.Build.DenseOfArray(kMatrix)).Trace()) + (cg * cg).Trace();
         var nu = (double)(n - rank);
         var expected = traceMA / nu;
-        var variance = GroupedDurbinWatson.Variance(traceMA, traceMA2, nu);
-        var d = DurbinWatson.Statistic(residuals);
-        if (double.IsNaN(d))
-        {
-            return new DurbinWatsonResult(d, double.NaN, expected, variance, OrderMethods.None, alternative, NotTestableReason.ZeroSpread);
-        }
-
-        var z = (d - expected) / Math.Sqrt(variance);
-        var pValue = alternative switch
-        {
-            DurbinWatsonAlternative.Positive => StandardNormal.Cdf(z),
-            DurbinWatsonAlternative.Negative => StandardNormal.UpperTail(z),
-            _ => Math.Min(1.0, 2.0 * Math.Min(StandardNormal.Cdf(z), StandardNormal.UpperTail(z))),
-        };
-        return new DurbinWatsonResult(d, pValue, expected, variance, OrderMethods.NormalApproximation, alternative);
+        return GroupedDurbinWatson.Normal(residuals, expected, GroupedDurbinWatson.Variance(traceMA, traceMA2, nu), alternative);
     }
 
     /// <summary>G = ZᵀAZ = Σ (z_t − z_{t−1})(z_t − z_{t−1})ᵀ and K = WᵀM_cW with W = AZ, over the run sequence: each z_t

@@ -34,6 +34,13 @@ public static class GroupedDurbinWatson
             return new DurbinWatsonResult(double.NaN, double.NaN, double.NaN, double.NaN, OrderMethods.None, alternative, NotTestableReason.TooFewValues);
         }
 
+        return Normal(residuals, mean, variance, alternative);
+    }
+
+    /// <summary>d of the residuals referred to the normal distribution with the given exact mean and variance
+    /// (not testable when every residual is zero).</summary>
+    internal static DurbinWatsonResult Normal(ReadOnlySpan<double> residuals, double mean, double variance, DurbinWatsonAlternative alternative)
+    {
         var d = DurbinWatson.Statistic(residuals);
         if (double.IsNaN(d))
         {

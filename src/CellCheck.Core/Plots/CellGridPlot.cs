@@ -99,7 +99,7 @@ public static class CellGridPlot
     }
 
     /// <summary>The largest Blom score of n, as NormalScores.Blom(n) gives it (by symmetry, minus the smallest).</summary>
-    private static double LastBlom(int n) => -Statistics.StandardNormal.Quantile((1 - 0.375) / (n + 0.25));
+    private static double LastBlom(int n) => -NormalScores.At(n, 0);
 
     private static Panel CellPanel(int index, CellResult cell, List<int> member, RowDiagnostics rows, Dictionary<int, OutlierRow> outliers, bool flagged,
         Axis x, Axis y, PlotOptions options, Dictionary<int, QqEnvelope> envelopes, string adjust)
@@ -116,7 +116,7 @@ public static class CellGridPlot
             var (mean, sd) = QqEnvelopes.MeanSd(sorted);
             var thinned = n > PointThinning.MaxPoints;
             var ranks = thinned ? PointThinning.Ranks(n) : null;
-            xs = ranks is null ? NormalScores.Blom(n) : ranks.Select(r => Statistics.StandardNormal.Quantile((r + 1 - 0.375) / (n + 0.25))).ToArray();
+            xs = ranks is null ? NormalScores.Blom(n) : ranks.Select(r => NormalScores.At(n, r)).ToArray();
             if (!envelopes.TryGetValue(n, out var envelope))
             {
                 envelope = ranks is null ? QqEnvelopes.Simulate(n, options.Seed, options.Draws) : QqEnvelopes.OrderStatistics(n, ranks);

@@ -9,6 +9,9 @@ namespace CellCheck.Core.Plots;
 /// </summary>
 public static class NormalScores
 {
+    /// <summary>The Blom score of rank <paramref name="rank"/> (0-based) of n, for plotting a few ranks of a large sample.</summary>
+    public static double At(int n, int rank) => StandardNormal.Quantile((rank + 1 - 0.375) / (n + 0.25));
+
     /// <summary>The n Blom scores in increasing order.</summary>
     public static double[] Blom(int n)
     {
@@ -16,7 +19,7 @@ public static class NormalScores
         var m = new double[n];
         for (var i = 0; i < n; i++)
         {
-            m[i] = StandardNormal.Quantile((i + 1 - 0.375) / (n + 0.25));
+            m[i] = At(n, i);
         }
 
         // exact symmetry, so the middle score of an odd n is 0 and pairs mirror to the last bit

@@ -97,7 +97,7 @@ public static class PooledPlot
         else
         {
             var ranks = PointThinning.Ranks(n);
-            xs = ranks.Select(r => StandardNormal.Quantile((r + 1 - 0.375) / (n + 0.25))).ToArray();
+            xs = ranks.Select(r => NormalScores.At(n, r)).ToArray();
             sorted = ranks.Select(r => keys[r]).ToArray();
             shown = ranks.Select(r => order[r]).ToArray();
             envelope = QqEnvelopes.OrderStatistics(n, ranks);

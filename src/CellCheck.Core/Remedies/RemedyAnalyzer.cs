@@ -101,7 +101,9 @@ public static class RemedyAnalyzer
             return settings;
         }
 
-        if (fitted.Name == "cell-means" || (data.Blocks.Count == 0 && spec.IsFull(data.Factors.Count) && data.Factors.All(f => !f.IsNumeric)))
+        // the residual sources name the cell-means fit "cell-means" whenever they use it (the declared full factorial
+        // without blocks, or a stand-in with a note), so the name decides here as well
+        if (fitted.Name == "cell-means")
         {
             return new GroupedRss(partition.Values.Starts);
         }

@@ -13,8 +13,8 @@ public static class ResidualSources
     {
         ArgumentNullException.ThrowIfNull(data);
         ArgumentNullException.ThrowIfNull(spec);
-        var cellMeans = data.Blocks.Count == 0 && spec.IsFull(data.Factors.Count) && data.Factors.All(f => !f.IsNumeric);
-        if (cellMeans)
+        var full = spec.IsFull(data.Factors.Count) && data.Factors.All(f => !f.IsNumeric);
+        if (full && data.Blocks.Count == 0)
         {
             return new CellMeansResiduals();
         }
@@ -22,7 +22,6 @@ public static class ResidualSources
         // the QR fit holds the dense n × p design matrix; beyond DenseLimit values it would not fit in memory
         var rows = data.Responses.Count == 0 ? 0 : (double)data.Responses[0].Values.Length;
         var columns = 1.0 + data.Blocks.Sum(b => b.Levels.Count - 1.0) + spec.Terms.Sum(t => t.Factors.Aggregate(1.0, (product, f) => product * Math.Max(1, data.Factors[f].IsNumeric ? 1 : data.Factors[f].Levels.Count - 1)));
-        var full = spec.IsFull(data.Factors.Count) && data.Factors.All(f => !f.IsNumeric);
         IResidualSource dense = rows * columns <= DenseLimit || !full
             ? new ModelResiduals(data.Blocks, spec, modelName)
             : new CellMeansResiduals("The declared model (" + modelName + ") has about " + Analysis.NumberText.Count((int)Math.Min(int.MaxValue, columns)) + " columns over " + Analysis.NumberText.Count((int)rows) + " rows, too large for the dense least-squares fit, and its blocks cannot be absorbed; "

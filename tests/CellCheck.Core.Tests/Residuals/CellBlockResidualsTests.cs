@@ -132,4 +132,17 @@ public sealed class CellBlockResidualsTests
         var rss = dense.ResidualSd * dense.ResidualSd * dense.ResidualDf;
         Assert.Equal(rss, settings.Of(y), rss * 1e-9);
     }
+
+    [Fact]
+    public void A_block_with_one_level_has_no_contrasts_and_Durbin_Watson_is_that_of_the_cells()
+    {
+        var random = new Random(8);
+        const int n = 300;
+        var cell = Enumerable.Range(0, n).Select(t => t < 6 ? t : random.Next(6)).ToArray();
+        var residuals = Enumerable.Range(0, n).Select(_ => random.NextDouble() - 0.5).ToArray();
+        var noContrast = new[] { Enumerable.Repeat(-1, n).ToArray() };
+        var blocked = CellBlockDurbinWatson.Test(residuals, cell, 6, noContrast, 0)!;
+        var grouped = GroupedDurbinWatson.Test(residuals, cell, 6);
+        Assert.Equal(grouped, blocked);
+    }
 }

@@ -57,10 +57,13 @@ internal static class Phases
         Mark("decisions");
         _ = Core.Planning.ReplicatesAssessor.Assess(census, residuals, options);
         Mark("replicates");
+        _ = RemedyFits.Compute(data, spec, partition, residuals.Diagnostics!.Model, column, 0, false);
+        Mark("remedy fits");
         var report = ResponseAnalyzer.Analyze(data, 0, options, spec);
         Mark("whole again");
         _ = RemedyAnalyzer.Analyze(data, 0, options, spec, report);
         Mark("remedy");
+        Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"GC pauses {GC.GetTotalPauseDuration().TotalSeconds:F2} s, collections gen0 {GC.CollectionCount(0)} gen1 {GC.CollectionCount(1)} gen2 {GC.CollectionCount(2)}, CPU {Process.GetCurrentProcess().TotalProcessorTime.TotalSeconds:F1} s"));
         _ = model;
     }
 }

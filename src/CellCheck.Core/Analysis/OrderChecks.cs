@@ -24,7 +24,7 @@ internal static class OrderChecks
         }
 
         var notes = new List<string>();
-        var (use, missing) = RunSequence.Used(order, partition, residuals.Diagnostics!.Leverage);
+        var (use, rows, missing) = RunSequence.UsedRows(order, partition, residuals.Diagnostics!.Leverage);
         if (missing > 0)
         {
             notes.Add(NumberText.Count(missing) + " row(s) have no run position and are left out of the order checks.");
@@ -32,11 +32,12 @@ internal static class OrderChecks
 
         var t = new double[use.Length];
         var e = new double[use.Length];
+        var byRow = ByRow(partition, residuals.Residuals, order.Length);
         var ties = 0;
         for (var k = 0; k < use.Length; k++)
         {
-            t[k] = order[partition.RowOrder[use[k]]];
-            e[k] = residuals.Residuals[use[k]];
+            t[k] = order[rows[k]];
+            e[k] = byRow[rows[k]];
             ties += k > 0 && t[k] == t[k - 1] ? 1 : 0;
         }
 
@@ -51,9 +52,9 @@ internal static class OrderChecks
         List<CheckResult> signAndTrend = null!;
         List<BlockOrderResult> byBlock = null!;
         Parallel.Invoke(
-            () => dw = DurbinWatsonOf(partition, residuals, use, e),
+            () => dw = DurbinWatsonOf(data, partition, residuals, use, rows, e),
             () => signAndTrend = SignAndTrend(e, t, alpha),
-            () => byBlock = data.Blocks.Count == 0 ? [] : ByBlock(data, partition, use, e, t, alpha));
+            () => byBlock = data.Blocks.Count == 0 ? [] : ByBlock(data, rows, e, t, alpha));
         if (dw is null)
         {
             checks.Add(CheckResults.NotTestable(CheckNames.DurbinWatson, NotTestableReason.TooManyValues));
@@ -73,19 +74,27 @@ internal static class OrderChecks
 
     /// <summary>Durbin-Watson on the residuals in run order: for the cell-means fit above the exact limit, from the
     /// O(n) moments of a group-indicator design; otherwise on the fitted design matrix; null when that is too large.</summary>
-    private static DurbinWatsonResult? DurbinWatsonOf(CellPartition partition, ResidualSet residuals, int[] use, double[] e)
+    private static DurbinWatsonResult? DurbinWatsonOf(DesignData data, CellPartition partition, ResidualSet residuals, int[] use, int[] rows, double[] e)
     {
-        var cells = partition.CellOfGroupedIndex();
         if (residuals.Diagnostics!.Absorbed is { } absorbed)
         {
-            var cellRun = new int[use.Length];
-            var dummyRun = absorbed.Dummy.Select(_ => new int[use.Length]).ToArray();
-            for (var k = 0; k < use.Length; k++)
+            var cellRun = CellsInRunOrder(partition, rows, data.RowCount);
+            var dummyRun = new int[absorbed.Dummy.Length][];
+            var grouped = partition.GroupedCodes(data.Blocks);
+            for (var j = 0; j < dummyRun.Length; j++)
             {
-                cellRun[k] = cells[use[k]];
-                for (var j = 0; j < dummyRun.Length; j++)
+                // the contrast column of each block level, read off the fit's grouped columns, then looked up by row
+                var contrast = new int[data.Blocks[j].Levels.Count];
+                for (var i = 0; i < grouped[j].Length; i++)
                 {
-                    dummyRun[j][k] = absorbed.Dummy[j][use[k]];
+                    contrast[grouped[j][i]] = absorbed.Dummy[j][i];
+                }
+
+                var codes = data.Blocks[j].Codes;
+                var run = dummyRun[j] = new int[rows.Length];
+                for (var k = 0; k < rows.Length; k++)
+                {
+                    run[k] = contrast[codes[rows[k]]];
                 }
             }
 
@@ -94,13 +103,7 @@ internal static class OrderChecks
 
         if (residuals.Diagnostics!.Estimable is null && use.Length > ExactLimit)
         {
-            var cellOf = new int[use.Length];
-            for (var k = 0; k < use.Length; k++)
-            {
-                cellOf[k] = cells[use[k]];
-            }
-
-            return GroupedDurbinWatson.Test(e, cellOf, partition.CellCount);
+            return GroupedDurbinWatson.Test(e, CellsInRunOrder(partition, rows, data.RowCount), partition.CellCount);
         }
 
         var x = Design(partition, residuals, use);
@@ -122,16 +125,51 @@ internal static class OrderChecks
         ];
     }
 
-    private static List<BlockOrderResult> ByBlock(DesignData data, CellPartition partition, int[] use, double[] e, double[] t, double alpha)
+    /// <summary>A grouped-order column written out by data row (reads in order, writes scattered: cheaper than gathering).</summary>
+    private static double[] ByRow(CellPartition partition, double[] grouped, int rows)
+    {
+        var result = new double[rows];
+        var order = partition.RowOrder;
+        for (var i = 0; i < order.Length; i++)
+        {
+            result[order[i]] = grouped[i];
+        }
+
+        return result;
+    }
+
+    /// <summary>The cell of each used row, in run order.</summary>
+    private static int[] CellsInRunOrder(CellPartition partition, int[] rows, int rowCount)
+    {
+        var cellOfRow = new int[rowCount];
+        var starts = partition.Values.Starts;
+        for (var c = 0; c < partition.CellCount; c++)
+        {
+            for (var i = starts[c]; i < starts[c + 1]; i++)
+            {
+                cellOfRow[partition.RowOrder[i]] = c;
+            }
+        }
+
+        var result = new int[rows.Length];
+        for (var k = 0; k < rows.Length; k++)
+        {
+            result[k] = cellOfRow[rows[k]];
+        }
+
+        return result;
+    }
+
+    private static List<BlockOrderResult> ByBlock(DesignData data, int[] rows, double[] e, double[] t, double alpha)
     {
         var result = new List<BlockOrderResult>();
         var block = data.Blocks[0];
         var levels = block.Levels.Count;
         var counts = new int[levels + 1];
-        var code = new int[use.Length]; // each used row's level, looked up once (two indirections into large arrays)
-        for (var k = 0; k < use.Length; k++)
+        var code = new int[rows.Length]; // each used row's level, read by row in run order
+        for (var k = 0; k < rows.Length; k++)
         {
-            code[k] = block.Codes[partition.RowOrder[use[k]]];
+            code[k] = block.Codes[rows[k]];
             counts[code[k] + 1]++;
         }
 
@@ -141,10 +179,10 @@ internal static class OrderChecks
         }
 
         // a stable counting sort of the run-ordered residuals by block level keeps run order within each level
-        var eb = new double[use.Length];
-        var tb = new double[use.Length];
+        var eb = new double[rows.Length];
+        var tb = new double[rows.Length];
         var next = (int[])counts.Clone();
-        for (var k = 0; k < use.Length; k++)
+        for (var k = 0; k < rows.Length; k++)
         {
             var at = next[code[k]]++;
             eb[at] = e[k];

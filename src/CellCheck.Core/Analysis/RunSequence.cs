@@ -4,13 +4,21 @@ namespace CellCheck.Core.Analysis;
 
 /// <summary>
 /// The residuals that enter the order checks, in run order: positions (in the partition's grouped order) of rows
-/// with a run position and leverage below one, sorted by run position, ties kept in file order. Linear time when
+/// with a run position and leverage below one, sorted by run position, ties kept in file order, and the data rows
+/// they are (so that callers read row-ordered columns in run order, sequentially when the file is in run order). Linear time when
 /// the file is already in run order (logged data) or the run positions are integers over a range not much wider
 /// than the row count (a stable counting sort); a comparison sort otherwise.
 /// </summary>
 internal static class RunSequence
 {
     public static (int[] Use, int Missing) Used(double[] order, CellPartition partition, double[] leverage)
+    {
+        var (use, _, missing) = UsedRows(order, partition, leverage);
+        return (use, missing);
+    }
+
+    /// <summary>As <see cref="Used"/>, with the data row of each position.</summary>
+    public static (int[] Use, int[] Rows, int Missing) UsedRows(double[] order, CellPartition partition, double[] leverage)
     {
         var rows = order.Length;
         var grouped = new int[rows];
@@ -55,36 +63,42 @@ internal static class RunSequence
             high = Math.Max(high, t);
         }
 
-        var use = new int[count];
+        var sequence = new int[count];
         if (sorted || count == 0)
         {
-            Collect(grouped, use);
+            Collect(grouped, sequence);
         }
         else if (integral && high - low <= (4.0 * count) + 16)
         {
-            CountingSort(order, grouped, use, low, (int)(high - low) + 1);
+            CountingSort(order, grouped, sequence, low, (int)(high - low) + 1);
         }
         else
         {
-            ComparisonSort(order, grouped, use);
+            ComparisonSort(order, grouped, sequence);
         }
 
-        return (use, missing);
+        var use = new int[count];
+        for (var k = 0; k < count; k++)
+        {
+            use[k] = grouped[sequence[k]];
+        }
+
+        return (use, sequence, missing);
     }
 
-    private static void Collect(int[] grouped, int[] use)
+    private static void Collect(int[] grouped, int[] rowsInOrder)
     {
         var k = 0;
-        foreach (var i in grouped)
+        for (var r = 0; r < grouped.Length; r++)
         {
-            if (i >= 0)
+            if (grouped[r] >= 0)
             {
-                use[k++] = i;
+                rowsInOrder[k++] = r;
             }
         }
     }
 
-    private static void CountingSort(double[] order, int[] grouped, int[] use, double low, int width)
+    private static void CountingSort(double[] order, int[] grouped, int[] rowsInOrder, double low, int width)
     {
         var starts = new int[width + 1];
         for (var r = 0; r < grouped.Length; r++)
@@ -104,15 +118,14 @@ internal static class RunSequence
         {
             if (grouped[r] >= 0)
             {
-                use[starts[(int)(order[r] - low)]++] = grouped[r];
+                rowsInOrder[starts[(int)(order[r] - low)]++] = r;
             }
         }
     }
 
-    private static void ComparisonSort(double[] order, int[] grouped, int[] use)
+    private static void ComparisonSort(double[] order, int[] grouped, int[] rowsOf)
     {
-        var keys = new double[use.Length];
-        var rowsOf = new int[use.Length];
+        var keys = new double[rowsOf.Length];
         var k = 0;
         for (var r = 0; r < grouped.Length; r++)
         {
@@ -139,11 +152,6 @@ internal static class RunSequence
             }
 
             a = b;
-        }
-
-        for (k = 0; k < use.Length; k++)
-        {
-            use[k] = grouped[rowsOf[k]];
         }
     }
 }

@@ -12,13 +12,29 @@ public sealed class CellPartition
 {
     private readonly int[] _cellLevels;
 
-    private CellPartition(IReadOnlyList<FactorColumn> factors, int[] cellLevels, int[] rowOrder, GroupedValues values)
+    private readonly Lazy<(int[] Settings, int Count)> _settings;
+
+    private CellPartition(IReadOnlyList<FactorColumn> factors, int[] cellLevels, int[] rowOrder, GroupedValues values,
+        IReadOnlyList<FactorColumn> blocks, IReadOnlyList<int[]> blockCodes)
     {
         Factors = factors;
         _cellLevels = cellLevels;
         RowOrder = rowOrder;
         Values = values;
+        Blocks = blocks;
+        BlockCodes = blockCodes;
+        _settings = new Lazy<(int[], int)>(() => SettingGroups.Compute(this, blocks, blockCodes));
     }
+
+    /// <summary>The block factors the partition was built with (rows without a block level are left out).</summary>
+    public IReadOnlyList<FactorColumn> Blocks { get; }
+
+    /// <summary>Per block factor, the level index of each grouped value (the block codes in grouped order).</summary>
+    public IReadOnlyList<int[]> BlockCodes { get; }
+
+    /// <summary>The identical-settings group of each grouped value and the number of groups (see <see cref="SettingGroups"/>),
+    /// computed once.</summary>
+    internal (int[] Settings, int Count) Settings => _settings.Value;
 
     /// <summary>The factors that define the cells.</summary>
     public IReadOnlyList<FactorColumn> Factors { get; }
@@ -31,6 +47,49 @@ public sealed class CellPartition
 
     /// <summary>Data row index of each grouped value.</summary>
     public int[] RowOrder { get; }
+
+    /// <summary>The level index of each grouped value on each of the given block factors: the partition's own codes
+    /// when these are its blocks, otherwise gathered through <see cref="RowOrder"/>.</summary>
+    public IReadOnlyList<int[]> GroupedCodes(IReadOnlyList<FactorColumn> blocks)
+    {
+        ArgumentNullException.ThrowIfNull(blocks);
+        if (IsOwn(blocks))
+        {
+            return BlockCodes;
+        }
+
+        var result = new int[blocks.Count][];
+        for (var b = 0; b < blocks.Count; b++)
+        {
+            var codes = blocks[b].Codes;
+            var target = result[b] = new int[RowOrder.Length];
+            for (var i = 0; i < target.Length; i++)
+            {
+                target[i] = codes[RowOrder[i]];
+            }
+        }
+
+        return result;
+    }
+
+    /// <summary>True when <paramref name="blocks"/> are the blocks the partition was built with.</summary>
+    internal bool IsOwn(IReadOnlyList<FactorColumn> blocks)
+    {
+        if (blocks.Count != Blocks.Count)
+        {
+            return false;
+        }
+
+        for (var b = 0; b < blocks.Count; b++)
+        {
+            if (!ReferenceEquals(blocks[b], Blocks[b]))
+            {
+                return false;
+            }
+        }
+
+        return true;
+    }
 
     /// <summary>Number of values in cell c.</summary>
     public int Size(int cell) => Values.Size(cell);
@@ -69,18 +128,23 @@ public sealed class CellPartition
     {
         ArgumentNullException.ThrowIfNull(factors);
         ArgumentNullException.ThrowIfNull(values);
-        if (blocks is { Count: > 0 })
+        blocks ??= [];
+        double[]? masked = null;
+        foreach (var block in blocks)
         {
             // a row without a block level cannot enter the model: treat it like a missing value
-            values = (double[])values.Clone();
-            for (var row = 0; row < values.Length; row++)
+            var codes = block.Codes;
+            for (var row = 0; row < codes.Length; row++)
             {
-                if (blocks.Any(b => b.Codes[row] < 0))
+                if (codes[row] < 0)
                 {
-                    values[row] = double.NaN;
+                    masked ??= (double[])values.Clone();
+                    masked[row] = double.NaN;
                 }
             }
         }
+
+        values = masked ?? values;
 
         var cellOfRow = new int[values.Length];
         var cellLevels = CellIndexer.Assign(factors, values, cellOfRow, out var cellCount);
@@ -115,6 +179,23 @@ public sealed class CellPartition
             grouped[at] = values[row];
         }
 
-        return new CellPartition(factors, cellLevels, rowOrder, new GroupedValues(grouped, starts));
+        // block codes in grouped order: read in row order, written scattered (cheaper than gathering later)
+        var blockCodes = new int[blocks.Count][];
+        for (var b = 0; b < blocks.Count; b++)
+        {
+            var codes = blocks[b].Codes;
+            var target = blockCodes[b] = new int[rowOrder.Length];
+            Array.Copy(starts, next, next.Length);
+            for (var row = 0; row < cellOfRow.Length; row++)
+            {
+                var c = cellOfRow[row];
+                if (c >= 0)
+                {
+                    target[next[c]++] = codes[row];
+                }
+            }
+        }
+
+        return new CellPartition(factors, cellLevels, rowOrder, new GroupedValues(grouped, starts), blocks, blockCodes);
     }
 }

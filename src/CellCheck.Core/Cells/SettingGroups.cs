@@ -10,6 +10,13 @@ internal static class SettingGroups
     /// numbered in order of first appearance within the cell (rows are grouped by cell, so one small map per cell).</summary>
     public static (int[] Settings, int Count) Of(CellPartition partition, IReadOnlyList<FactorColumn> blocks)
     {
+        return partition.IsOwn(blocks) ? partition.Settings : Compute(partition, blocks, partition.GroupedCodes(blocks));
+    }
+
+    /// <summary>The groups from block codes given in grouped order (the partition's own, or gathered for other blocks).</summary>
+    internal static (int[] Settings, int Count) Compute(CellPartition partition, IReadOnlyList<FactorColumn> blocks, IReadOnlyList<int[]> codes)
+    {
+        var radix = blocks.Select(b => b.Levels.Count + 1).ToArray();
         var result = new int[partition.RowOrder.Length];
         if (blocks.Count == 0)
         {
@@ -26,7 +33,7 @@ internal static class SettingGroups
         var count = 0;
         if (keys > 1 << 24)
         {
-            return Sparse(partition, blocks, result);
+            return Sparse(partition, codes, radix, result);
         }
 
         var map = new int[keys];
@@ -42,7 +49,7 @@ internal static class SettingGroups
             touched.Clear();
             for (var i = partition.Values.Starts[c]; i < partition.Values.Starts[c + 1]; i++)
             {
-                var key = Key(blocks, partition.RowOrder[i]);
+                var key = Key(codes, radix, i);
                 if (map[key] < 0)
                 {
                     map[key] = count++;
@@ -56,18 +63,18 @@ internal static class SettingGroups
         return (result, count);
     }
 
-    private static long Key(IReadOnlyList<FactorColumn> blocks, int row)
+    private static long Key(IReadOnlyList<int[]> codes, int[] radix, int i)
     {
         var key = 0L;
-        for (var j = 0; j < blocks.Count; j++)
+        for (var j = 0; j < radix.Length; j++)
         {
-            key = (key * (blocks[j].Levels.Count + 1)) + blocks[j].Codes[row] + 1;
+            key = (key * radix[j]) + codes[j][i] + 1;
         }
 
         return key;
     }
 
-    private static (int[] Settings, int Count) Sparse(CellPartition partition, IReadOnlyList<FactorColumn> blocks, int[] result)
+    private static (int[] Settings, int Count) Sparse(CellPartition partition, IReadOnlyList<int[]> codes, int[] radix, int[] result)
     {
         var count = 0;
         var local = new Dictionary<long, int>();
@@ -76,7 +83,7 @@ internal static class SettingGroups
             local.Clear();
             for (var i = partition.Values.Starts[c]; i < partition.Values.Starts[c + 1]; i++)
             {
-                var key = Key(blocks, partition.RowOrder[i]);
+                var key = Key(codes, radix, i);
                 if (!local.TryGetValue(key, out var g))
                 {
                     g = count++;

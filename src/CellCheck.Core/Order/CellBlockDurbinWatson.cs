@@ -12,7 +12,7 @@ namespace CellCheck.Core.Order;
 /// With M_c the residual projector of the cell indicators and Z = M_c X_b the cell-centred block contrasts,
 /// M = M_c − Z C⁻¹ Zᵀ with C = ZᵀZ. Writing G = ZᵀAZ and K = ZᵀA M_c A Z (p × p, accumulated row by row in run
 /// order), tr(MA) = tr(M_cA) − tr(C⁻¹G) and tr((MA)²) = tr((M_cA)²) − 2 tr(C⁻¹K) + tr((C⁻¹G)²), with the cell traces
-/// from <see cref="GroupedDurbinWatson"/>. Time O(n·p²), memory O(cells·p).
+/// from <see cref="GroupedDurbinWatson"/>. Time O(n·p²) (vectorised inner products over tiles of the run sequence), memory O(cells·p).
 /// </remarks>
 public static class CellBlockDurbinWatson
 {
@@ -91,8 +91,8 @@ public static class CellBlockDurbinWatson
     }
 
     /// <summary>G = ZᵀAZ = Σ (z_t − z_{t−1})(z_t − z_{t−1})ᵀ and K = WᵀM_cW with W = AZ, over the run sequence: each z_t
-    /// formed on the fly from the cell means and the block indicators, two symmetric rank-one updates per position
-    /// (vectorised), the sequence in two halves in parallel, added in a fixed order. (Splitting z into its sparse and
+    /// formed on the fly from the cell means and the block indicators, its difference and w_t written into tiles whose
+    /// column inner products are added to the two upper triangles, the sequence in two halves in parallel, added in a fixed order. (Splitting z into its sparse and
     /// cell-mean parts needs fewer operations but scatters them over every cell's accumulators, and ran slower.)</summary>
     private static (double[,] G, double[,] K) Accumulate(int[] cell, int cells, int[][] dummy, int p, double[] mean, double[] size)
     {
@@ -126,6 +126,10 @@ public static class CellBlockDurbinWatson
         return (g, k);
     }
 
+    /// <summary>Rows per tile: d and w are written column-wise into tiles of this many run positions, and each tile adds
+    /// its p(p + 1)/2 column inner products to the upper triangles (contiguous, vectorised dot products).</summary>
+    private const int Tile = 128;
+
     private static (double[] G, double[] WW, double[] CellW) Range(int[] cell, int cells, int[][] dummy, int p, double[] mean, int from, int to)
     {
         var n = cell.Length;
@@ -135,8 +139,9 @@ public static class CellBlockDurbinWatson
         var previous = new double[p];
         var current = new double[p];
         var next = new double[p];
-        var d = new double[p];
-        var w = new double[p];
+        var dTile = new double[p * Tile];
+        var wTile = new double[p * Tile];
+        var rows = 0;
         if (from > 0)
         {
             Centred(from - 1, cell, dummy, p, mean, previous);
@@ -155,28 +160,41 @@ public static class CellBlockDurbinWatson
             }
 
             var degree = (t > 0 ? 1 : 0) + (t + 1 < n ? 1 : 0);
+            var cellRow = cellW.AsSpan(cell[t] * p, p);
             for (var a = 0; a < p; a++)
             {
-                d[a] = current[a] - previous[a];
-                w[a] = (degree * current[a]) - (t > 0 ? previous[a] : 0) - (t + 1 < n ? next[a] : 0);
-                cellW[(cell[t] * p) + a] += w[a];
+                var w = (degree * current[a]) - (t > 0 ? previous[a] : 0) - (t + 1 < n ? next[a] : 0);
+                dTile[(a * Tile) + rows] = t > 0 ? current[a] - previous[a] : 0; // no difference at the first position
+                wTile[(a * Tile) + rows] = w;
+                cellRow[a] += w;
             }
 
-            // upper triangles only (both matrices are symmetric): row a from column a on
-            for (var a = 0; a < p; a++)
+            if (++rows == Tile)
             {
-                if (t > 0)
-                {
-                    VectorKernels.AddScaled(g.AsSpan((a * p) + a, p - a), d[a], d.AsSpan(a));
-                }
-
-                VectorKernels.AddScaled(ww.AsSpan((a * p) + a, p - a), w[a], w.AsSpan(a));
+                AddTile(g, dTile, p, rows);
+                AddTile(ww, wTile, p, rows);
+                rows = 0;
             }
 
             (previous, current, next) = (current, next, previous);
         }
 
+        AddTile(g, dTile, p, rows);
+        AddTile(ww, wTile, p, rows);
         return (g, ww, cellW);
+    }
+
+    /// <summary>Adds the inner products of the tile's columns (the first <paramref name="rows"/> of each) to the upper triangle of acc.</summary>
+    private static void AddTile(double[] acc, double[] tile, int p, int rows)
+    {
+        for (var a = 0; a < p; a++)
+        {
+            var x = tile.AsSpan(a * Tile, rows);
+            for (var b = a; b < p; b++)
+            {
+                acc[(a * p) + b] += VectorKernels.Dot(x, tile.AsSpan(b * Tile, rows));
+            }
+        }
     }
 
     private static void Centred(int t, int[] cell, int[][] dummy, int p, double[] mean, double[] z)

@@ -68,34 +68,63 @@ public static class GroupedDurbinWatson
     internal static double Variance(double traceMA, double traceMA2, double nu) =>
         Math.Max(0.0, 2.0 * ((nu * traceMA2) - (traceMA * traceMA)) / (nu * nu * (nu + 2)));
 
-    /// <summary>tr(MA), tr((MA)²) and the number of groups present, for M the residual projector of the group indicators.</summary>
+    /// <summary>tr(MA), tr((MA)²) and the number of groups present, for M the residual projector of the group indicators.
+    /// One pass in run order gathers b_c and ‖A1_c‖² per group and buckets every step between two groups under the lower
+    /// one (so each group's memory is touched, never the run sequence at random); a second pass counts the steps per pair.</summary>
     internal static (double TraceMA, double TraceMA2, int Groups) Traces(ReadOnlySpan<int> group, int groups)
     {
         var n = group.Length;
         var size = new int[groups];
-        foreach (var g in group)
-        {
-            size[g]++;
-        }
-
-        // positions of each group's members, grouped (a counting sort of the positions by group)
-        var start = new int[groups + 1];
-        for (var g = 0; g < groups; g++)
-        {
-            start[g + 1] = start[g] + size[g];
-        }
-
-        var positions = new int[n];
-        var next = (int[])start.Clone();
+        var boundary = new long[groups];
+        var squares = new long[groups];
+        var bucket = new int[groups + 1];
         for (var t = 0; t < n; t++)
         {
-            positions[next[group[t]]++] = t;
+            var g = group[t];
+            size[g]++;
+            var left = t > 0 ? group[t - 1] : -1;
+            var right = t < n - 1 ? group[t + 1] : -1;
+            var own = (left < 0 ? 0 : 1) + (right < 0 ? 0 : 1) - (left == g ? 1 : 0) - (right == g ? 1 : 0);
+            squares[g] += own * own;
+            var leftOut = left >= 0 && left != g;
+            var rightOut = right >= 0 && right != g;
+            boundary[g] += (leftOut ? 1 : 0) + (rightOut ? 1 : 0);
+            // (A1_c)_t = −(number of t's neighbours in c) for a group c that t is not in
+            if (leftOut && left == right)
+            {
+                squares[left] += 4;
+            }
+            else
+            {
+                squares[leftOut ? left : g] += leftOut ? 1 : 0;
+                squares[rightOut ? right : g] += rightOut ? 1 : 0;
+            }
+
+            if (leftOut)
+            {
+                bucket[Math.Min(left, g) + 1]++;
+            }
+        }
+
+        for (var g = 0; g < groups; g++)
+        {
+            bucket[g + 1] += bucket[g];
+        }
+
+        var partner = new int[bucket[groups]];
+        var next = bucket[..^1];
+        for (var t = 1; t < n; t++)
+        {
+            var (a, b) = (group[t - 1], group[t]);
+            if (a != b)
+            {
+                partner[next[Math.Min(a, b)]++] = Math.Max(a, b);
+            }
         }
 
         double traceHA = 0, traceHA2 = 0, traceHAHA = 0;
         var p = 0;
         var between = new int[groups];
-        var touched = new List<int>();
         for (var c = 0; c < groups; c++)
         {
             if (size[c] == 0)
@@ -104,59 +133,29 @@ public static class GroupedDurbinWatson
             }
 
             p++;
-            double boundary = 0, squares = 0;
-            foreach (var t in positions.AsSpan(start[c], size[c]))
+            traceHA += (double)boundary[c] / size[c];
+            traceHA2 += (double)squares[c] / size[c];
+            traceHAHA += (double)boundary[c] * boundary[c] / ((double)size[c] * size[c]);
+            var steps = partner.AsSpan(bucket[c], bucket[c + 1] - bucket[c]);
+            foreach (var other in steps)
             {
-                var left = t > 0 && group[t - 1] == c;
-                var right = t < n - 1 && group[t + 1] == c;
-                var degree = (t > 0 ? 1 : 0) + (t < n - 1 ? 1 : 0);
-                var own = degree - (left ? 1 : 0) - (right ? 1 : 0);
-                squares += own * own;
-                boundary += (t > 0 && !left ? 1 : 0) + (t < n - 1 && !right ? 1 : 0);
-                // a neighbour outside c: (A1_c)_s = −(number of its neighbours in c); count s once, from its left member when it has two
-                if (t > 0 && !left)
-                {
-                    var s = t - 1;
-                    var both = s > 0 && group[s - 1] == c;
-                    if (!both)
-                    {
-                        squares += 1;
-                    }
-
-                    Step(between, touched, group[s]);
-                }
-
-                if (t < n - 1 && !right)
-                {
-                    var s = t + 1;
-                    var both = s < n - 1 && group[s + 1] == c;
-                    squares += both ? 4 : 1;
-                    Step(between, touched, group[s]);
-                }
+                between[other]++;
             }
 
-            traceHA += boundary / size[c];
-            traceHA2 += squares / size[c];
-            traceHAHA += boundary * boundary / ((double)size[c] * size[c]);
-            foreach (var other in touched)
+            // each pair of distinct groups appears twice in Σ_{c,c'} (1_cᵀA1_c')²/(n_c n_c')
+            foreach (var other in steps)
             {
-                traceHAHA += (double)between[other] * between[other] / ((double)size[c] * size[other]);
-                between[other] = 0;
+                var k = between[other];
+                if (k > 0)
+                {
+                    traceHAHA += 2.0 * k * k / ((double)size[c] * size[other]);
+                    between[other] = 0;
+                }
             }
-
-            touched.Clear();
         }
 
         var traceMA = (2.0 * (n - 1)) - traceHA;
         var traceMA2 = (6.0 * n) - 8 - (2 * traceHA2) + traceHAHA;
         return (traceMA, traceMA2, p);
-    }
-
-    private static void Step(int[] between, List<int> touched, int other)
-    {
-        if (between[other]++ == 0)
-        {
-            touched.Add(other);
-        }
     }
 }

@@ -41,6 +41,11 @@ internal sealed class GroupedPowerSums
     private readonly double sumLog;
     private readonly CellBlockFit? between;
 
+    // scratch for one evaluation, reused (the optimiser evaluates one λ at a time)
+    private readonly double[] within;
+    private readonly double[]? means;
+    private readonly double[]? betweenResiduals;
+
     /// <param name="starts">Group g holds rows starts[g] .. starts[g + 1] − 1 of <paramref name="logs"/>.</param>
     /// <param name="logs">log y of every row, grouped.</param>
     /// <param name="between">For groups that are not the model's cells (identical settings of cells and blocks), the
@@ -54,6 +59,9 @@ internal sealed class GroupedPowerSums
         centre = new double[groups];
         reach = new double[groups];
         sums = new double[groups * (Terms + 1)];
+        within = new double[groups];
+        means = between is null ? null : new double[groups];
+        betweenResiduals = between is null ? null : new double[groups];
         foreach (var l in logs)
         {
             sumLog += l;
@@ -106,8 +114,11 @@ internal sealed class GroupedPowerSums
 
         // with λ·log y_r = top/2: y^(λ) = e^{top/2}·w + constant, and in group g w = A_g·u + B_g
         var reference = lambda == 0 ? centre[0] : 0;
-        var within = new double[groups];
-        var means = between is null ? null : new double[groups];
+        Array.Clear(within);
+        if (means is not null)
+        {
+            Array.Clear(means);
+        }
         // groups are independent: evaluated in parallel, each into its own slot, then summed in order (deterministic)
         Parallel.For(0, (groups + Chunk - 1) / Chunk, chunk =>
         {
@@ -138,7 +149,7 @@ internal sealed class GroupedPowerSums
 
         if (means is not null)
         {
-            var residuals = new double[groups];
+            var residuals = betweenResiduals!;
             between!.Residualize(means, residuals);
             for (var g = 0; g < groups; g++)
             {

@@ -19,8 +19,8 @@ public sealed class CellBlockResiduals(IReadOnlyList<FactorColumn> blocks, Model
     {
         ArgumentNullException.ThrowIfNull(partition);
         var complete = partition.Factors.Aggregate(1L, (product, f) => product * f.Levels.Count) == partition.CellCount;
-        var codes = blocks.Select(b => Gather(partition.RowOrder, b.Codes)).ToArray();
-        var fit = complete && partition.RowOrder.Length > 0 && codes.All(c => c.All(v => v >= 0))
+        var codes = partition.GroupedCodes(blocks);
+        var fit = complete && partition.RowOrder.Length > 0 && codes.All(c => c.AsSpan().IndexOfAnyInRange(int.MinValue, -1) < 0)
             ? CellBlockFit.Build(partition.Values.Starts, codes)
             : null;
         if (fit is null)
@@ -67,16 +67,5 @@ public sealed class CellBlockResiduals(IReadOnlyList<FactorColumn> blocks, Model
         {
             Diagnostics = new ResidualDiagnostics(leverage, external, cooks, info) { Absorbed = fit },
         };
-    }
-
-    private static int[] Gather(int[] order, int[] codes)
-    {
-        var result = new int[order.Length];
-        for (var i = 0; i < order.Length; i++)
-        {
-            result[i] = codes[order[i]];
-        }
-
-        return result;
     }
 }

@@ -14,6 +14,50 @@ internal sealed class ScanState(long maxLineBytes)
     private int _leadLine;
     private int _leadColumn;
 
+    /// <summary>Takes a run of bytes. ASCII without NUL (the usual data file) is taken line by line with vectorised
+    /// searches; anything else, and any line that would run over the limit, byte by byte through <see cref="Step"/>,
+    /// so faults are found and located exactly as there.</summary>
+    public TextFault? Run(ReadOnlySpan<byte> bytes)
+    {
+        if (_pending == 0 && System.Text.Ascii.IsValid(bytes) && !bytes.Contains((byte)0))
+        {
+            while (!bytes.IsEmpty)
+            {
+                var end = bytes.IndexOfAny((byte)'\r', (byte)'\n');
+                var text = end < 0 ? bytes.Length : end;
+                if (_lineBytes + text > maxLineBytes)
+                {
+                    break;
+                }
+
+                if (text > 0)
+                {
+                    _lineBytes += text;
+                    _column += text;
+                    _afterCr = false;
+                }
+
+                if (end < 0)
+                {
+                    return null;
+                }
+
+                _ = Step(bytes[end]);
+                bytes = bytes[(end + 1)..];
+            }
+        }
+
+        foreach (var b in bytes)
+        {
+            if (Step(b) is { } fault)
+            {
+                return fault;
+            }
+        }
+
+        return null;
+    }
+
     public TextFault? Step(byte b)
     {
         if (_pending > 0)

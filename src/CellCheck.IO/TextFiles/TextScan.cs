@@ -35,12 +35,9 @@ public static class TextScan
                 start = read >= 3 && buffer[0] == 0xEF && buffer[1] == 0xBB && buffer[2] == 0xBF ? 3 : 0;
             }
 
-            for (var i = start; i < read; i++)
+            if (state.Run(buffer.AsSpan(start, read - start)) is { } fault)
             {
-                if (state.Step(buffer[i]) is { } fault)
-                {
-                    return fault;
-                }
+                return fault;
             }
         }
 

@@ -12,18 +12,25 @@ internal static class PooledChecks
 {
     public static PooledResult Run(ResidualSet residuals, double alpha)
     {
-        var values = new List<double>(residuals.Studentized.Length);
+        var finite = 0;
+        foreach (var r in residuals.Studentized)
+        {
+            finite += double.IsFinite(r) ? 1 : 0;
+        }
+
+        var values = new double[finite];
+        var k = 0;
         foreach (var r in residuals.Studentized)
         {
             if (double.IsFinite(r))
             {
-                values.Add(r);
+                values[k++] = r;
             }
         }
 
         var notes = new List<string>();
-        var span = System.Runtime.InteropServices.CollectionsMarshal.AsSpan(values);
-        if (residuals.ResidualDf <= 0 || values.Count == 0)
+        var span = values.AsSpan();
+        if (residuals.ResidualDf <= 0 || values.Length == 0)
         {
             notes.Add("No residual degrees of freedom: every cell holds a single value, so residuals cannot be judged.");
             var reason = NotTestableReason.NoResidualDegreesOfFreedom;
@@ -32,9 +39,9 @@ internal static class PooledChecks
                  CheckResults.NotTestable(CheckNames.DagostinoPearson, reason)], notes);
         }
 
-        if (values.Count > PrimaryRules.ShapiroWilkLimit)
+        if (values.Length > PrimaryRules.ShapiroWilkLimit)
         {
-            notes.Add($"Shapiro-Wilk's p approximation holds up to {PrimaryRules.ShapiroWilkLimit} values; with {values.Count} the W statistic is shown without p. "
+            notes.Add($"Shapiro-Wilk's p approximation holds up to {PrimaryRules.ShapiroWilkLimit} values; with {values.Length} the W statistic is shown without p. "
                 + "Judge by Anderson-Darling, D'Agostino-Pearson and the size of skewness and kurtosis.");
         }
 
@@ -46,6 +53,6 @@ internal static class PooledChecks
             CheckResults.From(CheckNames.AndersonDarling, AndersonDarling.Test(span), alpha),
             CheckResults.From(CheckNames.DagostinoPearson, DagostinoPearson.Test(span), alpha),
         ];
-        return new PooledResult(residuals.Model, values.Count, residuals.ResidualDf, residuals.ResidualSd, moments.Skewness, moments.ExcessKurtosis, checks, notes);
+        return new PooledResult(residuals.Model, values.Length, residuals.ResidualDf, residuals.ResidualSd, moments.Skewness, moments.ExcessKurtosis, checks, notes);
     }
 }

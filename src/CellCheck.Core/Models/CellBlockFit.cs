@@ -73,23 +73,32 @@ internal sealed class CellBlockFit
         var p = 0;
         for (var j = 0; j < blockCodes.Count; j++)
         {
+            // level codes are small non-negative integers: the contrast column of each present code by a table
             var codes = blockCodes[j];
-            var present = new SortedSet<int>();
+            var largest = -1;
             foreach (var code in codes)
             {
-                present.Add(code);
+                largest = Math.Max(largest, code);
             }
 
-            var index = new Dictionary<int, int>();
-            foreach (var code in present.Skip(1))
+            var present = new bool[largest + 1];
+            foreach (var code in codes)
             {
-                index[code] = p++;
+                present[code] = true;
+            }
+
+            var column = new int[largest + 1];
+            var reference = true; // the lowest present code is the reference level (no column)
+            for (var code = 0; code <= largest; code++)
+            {
+                column[code] = !present[code] || reference ? -1 : p++;
+                reference &= !present[code];
             }
 
             dummy[j] = new int[units];
             for (var i = 0; i < units; i++)
             {
-                dummy[j][i] = index.TryGetValue(codes[i], out var k) ? k : -1;
+                dummy[j][i] = column[codes[i]];
             }
         }
 

@@ -111,11 +111,17 @@ public static class AndersonDarling
         var n = x.Length;
         var (mean, sd) = MeanAndSd(x);
         var sum = default(NeumaierSum);
-        for (var i = 0; i < n; i++)
+        // terms i and n − 1 − i together: each value's two log tails come from one erfc
+        for (var i = 0; i <= (n - 1) / 2; i++)
         {
-            var lower = StandardNormal.LogCdf((x[i] - mean) / sd);
-            var upper = StandardNormal.LogCdf(-(x[n - 1 - i] - mean) / sd);
-            sum.Add(((2.0 * i) + 1.0) * (lower + upper));
+            var j = n - 1 - i;
+            var (lowerI, upperI) = StandardNormal.LogCdfBoth((x[i] - mean) / sd);
+            var (lowerJ, upperJ) = j == i ? (lowerI, upperI) : StandardNormal.LogCdfBoth((x[j] - mean) / sd);
+            sum.Add(((2.0 * i) + 1.0) * (lowerI + upperJ));
+            if (j != i)
+            {
+                sum.Add(((2.0 * j) + 1.0) * (lowerJ + upperI));
+            }
         }
 
         return -n - (sum.Value / n);

@@ -1,5 +1,3 @@
-using MathNet.Numerics.Distributions;
-
 namespace CellCheck.Core.Statistics;
 
 /// <summary>
@@ -16,7 +14,7 @@ namespace CellCheck.Core.Statistics;
 /// which takes the lowest score whatever the spread of the data, and so only adds noise. On data where every group
 /// has two or more values the two agree. Not testable when fewer than two groups take part
 /// (<see cref="NotTestableReason.TooFewGroups"/>) or when all scores are equal, so s²_a is zero
-/// (<see cref="NotTestableReason.DegenerateWithinGroups"/>). Φ⁻¹ is MathNet's inverse normal CDF.
+/// (<see cref="NotTestableReason.DegenerateWithinGroups"/>). Φ⁻¹ is evaluated once per distinct mid-rank (MathNet's inverse complementary error function).
 /// <para>Ties. Deviations that are equal in exact arithmetic (decimal data such as 0.998 and 1.002 about a median
 /// of 1.000) often differ in binary by a few units in the last place, and an exact-equality rank then breaks the tie
 /// by rounding noise; R's fligner.test and scipy's stats.fligner do so, and their X² shifts with the noise (GEAR:
@@ -59,14 +57,10 @@ public static class FlignerKilleen
             }
         }
 
-        var ranks = new double[n];
-        TieAveragedRanks.Compute(scores, ranks, TieUlps * (Math.BitIncrement(magnitude) - magnitude));
-        for (var i = 0; i < n; i++)
-        {
-            scores[i] = Normal.InvCDF(0.0, 1.0, (1.0 + (ranks[i] / (n + 1))) / 2.0);
-        }
-
-        var table = OneWayAnova.Compute(new GroupedValues(scores, part.Starts));
+        var normalScores = new double[n];
+        TieAveragedRanks.Compute(scores, normalScores, TieUlps * (Math.BitIncrement(magnitude) - magnitude),
+            rank => StandardNormal.Quantile((1.0 + (rank / (n + 1))) / 2.0));
+        var table = OneWayAnova.Compute(new GroupedValues(normalScores, part.Starts));
         var total = table.SsBetween + table.SsWithin;
         if (!(total > 0))
         {

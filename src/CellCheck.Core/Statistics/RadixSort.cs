@@ -3,7 +3,7 @@ namespace CellCheck.Core.Statistics;
 /// <summary>
 /// Ascending sort of doubles (optionally carrying an int payload) by least-significant-digit radix sort on the
 /// order-preserving bit pattern of each value (sign bit flipped for positives, all bits for negatives; Knuth, TAOCP
-/// vol. 3, §5.2.5), four passes of 16 bits, a pass skipped when every value shares its digit. Stable; linear time;
+/// vol. 3, §5.2.5), six passes of 11 bits (histograms from one read), a pass skipped when every value shares its digit. Stable; linear time;
 /// used above <see cref="Threshold"/> values, where it is several times faster than the comparison sort. No NaN.
 /// </summary>
 internal static class RadixSort
@@ -93,33 +93,47 @@ internal static class RadixSort
     private static double Value(ulong key) =>
         BitConverter.Int64BitsToDouble((long)((key & 0x8000_0000_0000_0000UL) != 0 ? key & 0x7FFF_FFFF_FFFF_FFFFUL : ~key));
 
+    /// <summary>Bits per digit: 2048 buckets keep every pass's scatter targets within the cache (16-bit digits, with
+    /// 65 536 targets, spent most of their time in cache and TLB misses).</summary>
+    private const int DigitBits = 11;
+
+    private const int Passes64 = (64 + DigitBits - 1) / DigitBits;
+
     /// <summary>Runs the passes between the two buffers; true when the result ended in the spare buffers.</summary>
     private static bool Passes(ulong[] keys, ulong[] spare, int[]? payload, int[]? carried, int n)
     {
-        var counts = new int[1 << 16];
-        var swapped = false;
-        for (var shift = 0; shift < 64; shift += 16)
+        const int buckets = 1 << DigitBits;
+        const ulong mask = buckets - 1;
+        // every pass's histogram from one read of the keys
+        var counts = new int[Passes64 * buckets];
+        for (var i = 0; i < n; i++)
         {
-            Array.Clear(counts);
-            for (var i = 0; i < n; i++)
+            var key = keys[i];
+            for (var pass = 0; pass < Passes64; pass++)
             {
-                counts[(int)((keys[i] >> shift) & 0xFFFF)]++;
+                counts[(pass * buckets) + (int)((key >> (pass * DigitBits)) & mask)]++;
             }
+        }
 
-            if (counts[(int)((keys[0] >> shift) & 0xFFFF)] == n)
+        var swapped = false;
+        for (var pass = 0; pass < Passes64; pass++)
+        {
+            var shift = pass * DigitBits;
+            var offsets = counts.AsSpan(pass * buckets, buckets);
+            if (offsets[(int)((keys[0] >> shift) & mask)] == n)
             {
                 continue; // every key has this digit
             }
 
             var total = 0;
-            for (var d = 0; d < counts.Length; d++)
+            for (var d = 0; d < buckets; d++)
             {
-                (counts[d], total) = (total, total + counts[d]);
+                (offsets[d], total) = (total, total + offsets[d]);
             }
 
             for (var i = 0; i < n; i++)
             {
-                var at = counts[(int)((keys[i] >> shift) & 0xFFFF)]++;
+                var at = offsets[(int)((keys[i] >> shift) & mask)]++;
                 spare[at] = keys[i];
                 if (payload is not null)
                 {

@@ -38,6 +38,7 @@ internal sealed class GroupedPowerSums
     private readonly double[] centre;
     private readonly double[] reach;
     private readonly double[] sums;
+    private readonly int[] terms;
     private readonly double sumLog;
     private readonly CellBlockFit? between;
 
@@ -59,6 +60,7 @@ internal sealed class GroupedPowerSums
         centre = new double[groups];
         reach = new double[groups];
         sums = new double[groups * (Terms + 1)];
+        terms = new int[groups];
         within = new double[groups];
         means = between is null ? null : new double[groups];
         betweenResiduals = between is null ? null : new double[groups];
@@ -76,13 +78,18 @@ internal sealed class GroupedPowerSums
             }
 
             centre[g] = Statistics.Descriptive.Mean(cell);
+            foreach (var l in cell)
+            {
+                reach[g] = Math.Max(reach[g], Math.Abs(l - centre[g]));
+            }
+
+            var kept = terms[g] = TermsWithin(cell.Length, reach[g]);
             var s = sums.AsSpan(g * (Terms + 1), Terms + 1);
             foreach (var l in cell)
             {
                 var e = l - centre[g];
-                reach[g] = Math.Max(reach[g], Math.Abs(e));
                 var power = e;
-                for (var k = 1; k <= Terms; k++)
+                for (var k = 1; k <= kept; k++)
                 {
                     s[k] += power;
                     power *= e;
@@ -176,7 +183,7 @@ internal sealed class GroupedPowerSums
         // 4n·x^(k−2)/k! with x = 2|λ|·reach ≤ 2; stop once it is far below rounding
         var x = 2 * Math.Abs(lambda) * reach[g];
         var bound = 2.0 * n;
-        for (var k = 1; k <= Terms; k++)
+        for (var k = 1; k <= terms[g]; k++)
         {
             twoPower *= 2;
             var term = s[k];
@@ -196,7 +203,32 @@ internal sealed class GroupedPowerSums
             power *= lambda;
         }
 
+        if (bound >= 1e-18 && terms[g] < Terms)
+        {
+            return Direct(g, n, lambda); // |λ| beyond the search range: more terms than were summed would be needed
+        }
+
         return (sum, squares - (sum * sum / n));
+    }
+
+    /// <summary>The number of series terms that <see cref="Sums"/> uses at most for a group of n values whose centred logs
+    /// reach <paramref name="reach"/>, over the whole search range of λ (the same stopping rule at the largest |λ|, on the
+    /// series route): power sums above it are never read, so they are not formed.</summary>
+    private static int TermsWithin(int n, double reach)
+    {
+        var x = 2 * Math.Min(1.0, Math.Max(-BoxCox.SearchLower, BoxCox.SearchUpper) * reach);
+        var bound = 2.0 * n;
+        for (var k = 2; k <= Terms; k++)
+        {
+            if (bound < 1e-18)
+            {
+                return k;
+            }
+
+            bound *= x * Reciprocal[k + 1];
+        }
+
+        return Terms;
     }
 
     private (double Sum, double Squares) Direct(int g, int n, double lambda)

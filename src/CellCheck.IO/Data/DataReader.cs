@@ -9,7 +9,8 @@ namespace CellCheck.IO.Data;
 /// declared; quoted fields; UTF-8 with or without BOM; decimal comma and thousands separator as declared) or an XLSX
 /// sheet. Only the columns the design names are kept. A missing factor or block value excludes the row for every
 /// response; a missing or non-numeric response value excludes it for that response; rows outside the design's
-/// <c>where</c> filter are counted. Every exclusion is kept with its line and reason.
+/// <c>where</c> filter are counted. Every exclusion is kept with its line and reason. A large delimited file without
+/// quotes is read in two ranges on two threads (<see cref="SplitReader"/>), to the same data.
 /// </summary>
 public static class DataReader
 {

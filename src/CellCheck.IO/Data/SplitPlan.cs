@@ -5,7 +5,7 @@ namespace CellCheck.IO.Data;
 /// at or past the middle of the file. Only a file without any quote character is cut (a quoted field may hold a line
 /// break, so a line would not be sure to start a row), and only a UTF-8 one (the encoding check reports others).
 /// </summary>
-/// <param name="Header">The file's first line with its line break (the header), to put before the second range.</param>
+/// <param name="Header">The file's first line (the header) and a line feed, to put before the second range.</param>
 /// <param name="Start">The byte offset where the second range starts.</param>
 /// <param name="FirstLine">The file line the second range starts on.</param>
 internal sealed record SplitPlan(byte[] Header, long Start, int FirstLine)
@@ -44,7 +44,7 @@ internal sealed record SplitPlan(byte[] Header, long Start, int FirstLine)
 
             if (start < 0 && at + read > length / 2)
             {
-                var from = (int)Math.Max(0, Math.Max(length / 2, header.Length) - at);
+                var from = (int)Math.Max(0, Math.Max(length / 2, header.Length + 1) - at); // past the header's break, CR LF or not
                 var feed = from < read ? chunk[from..].IndexOf((byte)'\n') : -1;
                 start = feed < 0 ? -1 : at + from + feed + 1;
             }
@@ -57,16 +57,12 @@ internal sealed record SplitPlan(byte[] Header, long Start, int FirstLine)
         return start > 0 && start < length && breaks < int.MaxValue ? new SplitPlan(header!, start, (int)breaks + 1) : null;
     }
 
-    /// <summary>The header line with its break, from the file's first bytes; empty when it cannot be taken.</summary>
+    /// <summary>The header line ended by a line feed (whatever break it has in the file: a lone CR would join a line feed
+    /// that starts the second range into one break), from the file's first bytes; empty when it cannot be taken.</summary>
     private static byte[] HeaderLine(ReadOnlySpan<byte> head)
     {
         var unicodeMark = head.Length >= 2 && (head[0] is 0xFF or 0xFE || head[0] == 0);
         var end = head.IndexOfAny((byte)'\r', (byte)'\n');
-        if (unicodeMark || end < 0 || end + 1 >= head.Length)
-        {
-            return [];
-        }
-
-        return head[..(end + (head[end] == '\r' && head[end + 1] == '\n' ? 2 : 1))].ToArray();
+        return unicodeMark || end < 0 || end + 1 >= head.Length ? [] : [.. head[..end], (byte)'\n'];
     }
 }

@@ -86,6 +86,20 @@ public sealed class SplitReaderTests
         Assert.Equal(300, Same(t, split).Value!.RowCount);
     }
 
+    [Fact]
+    public void A_header_ended_by_a_lone_cr_before_a_second_range_that_starts_with_a_blank_line_keeps_the_lines()
+    {
+        var text = new StringBuilder("a,b,y\r");
+        for (var i = 0; i < 100; i++)
+        {
+            text.Append("a1,b").Append(i % 2).Append(',').Append(i).Append(i is >= 40 and < 60 ? "\n\n\n\n" : "\n");
+        }
+
+        using var t = new TempDesign(text.ToString());
+        Assert.Equal('\n', text[(int)SplitPlan.Find(t.DataPath, 0)!.Start]);
+        Same(t);
+    }
+
     [Theory]
     [InlineData(250)]
     [InlineData(60)]

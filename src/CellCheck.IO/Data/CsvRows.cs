@@ -14,16 +14,29 @@ internal sealed class CsvRows : ITableRows
 {
     private readonly SepReader _reader;
     private readonly string _path;
+    private readonly int _lineOffset;
     private bool _multiline;
 
     public CsvRows(string path, char? delimiter, NumberSyntax numbers)
+        : this(path, Options(delimiter).FromFile(path), numbers, 0)
+    {
+    }
+
+    /// <summary>Rows of one range of the file at <paramref name="path"/>: <paramref name="range"/> holds the header line
+    /// and then the range's lines, the first of which is line <paramref name="firstLine"/> of the file.</summary>
+    public CsvRows(string path, Stream range, char? delimiter, NumberSyntax numbers, int firstLine)
+        : this(path, Options(delimiter).From(range), numbers, firstLine - 2)
+    {
+    }
+
+    private CsvRows(string path, SepReader reader, NumberSyntax numbers, int lineOffset)
     {
         _path = path;
-        _reader = delimiter is { } d
-            ? Sep.New(d).Reader(o => o with { Unescape = true, DisableColCountCheck = true }).FromFile(path)
-            : Sep.Reader(o => o with { Unescape = true, DisableColCountCheck = true }).FromFile(path);
+        _reader = reader;
+        _lineOffset = lineOffset;
         Header = _reader.Header.ColNames;
         Numbers = numbers;
+        NextLine += lineOffset;
     }
 
     public IReadOnlyList<string> Header { get; }
@@ -39,13 +52,21 @@ internal sealed class CsvRows : ITableRows
 
     public Problem? Fault { get; private set; }
 
+    /// <summary>Reading ends before the row that starts on this line (the first line of a range read by another reader).</summary>
+    public int StopLine { get; set; } = int.MaxValue;
+
     public bool Next()
     {
         while (_reader.MoveNext())
         {
             var row = _reader.Current;
-            Line = row.LineNumberFrom;
-            NextLine = row.LineNumberToExcl;
+            if (row.LineNumberFrom + _lineOffset >= StopLine)
+            {
+                return false;
+            }
+
+            Line = row.LineNumberFrom + _lineOffset;
+            NextLine = row.LineNumberToExcl + _lineOffset;
             if (row.ColCount == 1 && row[0].Span.IsWhiteSpace() && Header.Count > 1)
             {
                 continue;
@@ -87,6 +108,10 @@ internal sealed class CsvRows : ITableRows
     public string Locate(int line, int column) => "line " + Text(line);
 
     public void Dispose() => _reader.Dispose();
+
+    private static SepReaderOptions Options(char? delimiter) => delimiter is { } d
+        ? Sep.New(d).Reader(o => o with { Unescape = true, DisableColCountCheck = true })
+        : Sep.Reader(o => o with { Unescape = true, DisableColCountCheck = true });
 
     private static string Text(int value) => value.ToString(CultureInfo.InvariantCulture);
 }

@@ -9,7 +9,8 @@ namespace CellCheck.IO.Data;
 /// declared; quoted fields; UTF-8 with or without BOM; decimal comma and thousands separator as declared) or an XLSX
 /// sheet. Only the columns the design names are kept. A missing factor or block value excludes the row for every
 /// response; a missing or non-numeric response value excludes it for that response; rows outside the design's
-/// <c>where</c> filter are counted. Every exclusion is kept with its line and reason.
+/// <c>where</c> filter are counted. Every exclusion is kept with its line and reason. A large delimited file without
+/// quotes is read in two ranges on two threads (<see cref="SplitReader"/>), to the same data.
 /// </summary>
 public static class DataReader
 {
@@ -17,14 +18,20 @@ public static class DataReader
     /// a fault, when found, is reported in place of whatever the parse gave.</summary>
     public const long ConcurrentScanBytes = 8 << 20;
 
-    public static LoadResult<DesignData> Read(DesignFile design)
+    /// <summary>Delimited files above this size without quotes are read in two ranges on two threads (<see cref="SplitReader"/>).</summary>
+    internal const long SplitBytes = 32 << 20;
+
+    public static LoadResult<DesignData> Read(DesignFile design) => Read(design, SplitBytes);
+
+    /// <param name="splitBytes">The size above which a delimited file is read on two threads (tests lower it).</param>
+    internal static LoadResult<DesignData> Read(DesignFile design, long splitBytes)
     {
         ArgumentNullException.ThrowIfNull(design);
         var path = design.DataPath;
         var scan = TableOpener.IsText(path) && File.Exists(path) && new FileInfo(path).Length > ConcurrentScanBytes
             ? Task.Run(() => ScanQuietly(path))
             : null;
-        var result = Parse(design, scan is not null);
+        var result = Parse(design, scan is not null, splitBytes);
         return scan?.Result is { } fault ? LoadResult<DesignData>.Failure(TextFiles.TextProblems.For(fault, path, design: false)) : result;
     }
 
@@ -41,7 +48,7 @@ public static class DataReader
         }
     }
 
-    private static LoadResult<DesignData> Parse(DesignFile design, bool scanned)
+    private static LoadResult<DesignData> Parse(DesignFile design, bool scanned, long splitBytes)
     {
         var opened = TableOpener.Open(design, scanned);
         if (opened.Problem is not null)
@@ -52,19 +59,28 @@ public static class DataReader
         using var table = opened.Table!;
         try
         {
-            return RowReader.Read(design, table);
+            return table is CsvRows csv && SplitPlan.Find(design.DataPath, splitBytes) is { } plan
+                ? SplitReader.Read(design, csv, plan)
+                : RowReader.Read(design, table);
         }
         catch (InvalidDataException ex)
         {
-            var line = (table as CsvRows)?.NextLine ?? table.Line + 1;
-            return LoadResult<DesignData>.Failure(new Problem(ProblemCodes.RaggedRow, design.DataPath, line, null,
-                "A row has a different number of fields than the header: " + TableOpener.FirstLine(ex.Message),
-                "Check for a missing or extra separator on this line, or a quote that is not closed."));
+            return LoadResult<DesignData>.Failure(RaggedRow(design, (table as CsvRows)?.NextLine ?? table.Line + 1, ex));
         }
         catch (IOException ex)
         {
-            return LoadResult<DesignData>.Failure(new Problem(ProblemCodes.DataUnreadable, design.DataPath, null, null,
-                "The data file cannot be read: " + ex.Message, "Check that the file is not locked and is readable."));
+            return LoadResult<DesignData>.Failure(Unreadable(design, ex));
         }
     }
+
+    /// <summary>The problem for a row the delimited-text reader refuses, starting on <paramref name="line"/>.</summary>
+    internal static Problem RaggedRow(DesignFile design, int line, InvalidDataException ex) =>
+        new(ProblemCodes.RaggedRow, design.DataPath, line, null,
+            "A row has a different number of fields than the header: " + TableOpener.FirstLine(ex.Message),
+            "Check for a missing or extra separator on this line, or a quote that is not closed.");
+
+    /// <summary>The problem for a data file that fails while it is read.</summary>
+    internal static Problem Unreadable(DesignFile design, IOException ex) =>
+        new(ProblemCodes.DataUnreadable, design.DataPath, null, null,
+            "The data file cannot be read: " + ex.Message, "Check that the file is not locked and is readable.");
 }

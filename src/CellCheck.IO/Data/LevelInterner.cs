@@ -33,6 +33,39 @@ internal sealed class LevelInterner(string name)
         _codes.Add(code);
     }
 
+    /// <summary>Takes over the rows of <paramref name="next"/>, which read the rows after this interner's: its labels that
+    /// are new here are added in its order of first appearance and its codes renumbered to match.</summary>
+    public void Append(LevelInterner next)
+    {
+        var renumber = new int[next._labels.Count];
+        var same = true;
+        for (var i = 0; i < renumber.Length; i++)
+        {
+            var label = next._labels[i];
+            if (!_index.TryGetValue(label, out var code))
+            {
+                code = _labels.Count;
+                _labels.Add(label);
+                _index.Add(label, code);
+            }
+
+            renumber[i] = code;
+            same &= code == i;
+        }
+
+        for (var s = 0; s < next._codes.SegmentCount && !same; s++)
+        {
+            var codes = next._codes.Segment(s);
+            for (var row = 0; row < codes.Length; row++)
+            {
+                var c = codes[row];
+                codes[row] = c < 0 ? c : renumber[c];
+            }
+        }
+
+        _codes.Append(next._codes);
+    }
+
     /// <summary>The first label that is not a number that can be computed with (finite, magnitude within the range
     /// <see cref="ResponseBuilder.InRange"/> allows), or null when every label is one.</summary>
     public string? FirstNonNumeric(NumberSyntax syntax) => _labels.FirstOrDefault(l => !ResponseBuilder.InRange(syntax.ParseDouble(l)));

@@ -11,12 +11,14 @@ namespace CellCheck.IO.Data;
 /// exclusion that says why: <c>missing</c>, <c>not-a-number</c>, <c>not-finite</c> (NaN, Inf), <c>out-of-range</c>
 /// (magnitude above 1e100 or, other than 0, below 1e-100) or <c>thousands-separator</c>.
 /// </summary>
-internal sealed class ResponseBuilder(string name, string? unit, MissingTokens missing, NumberSyntax syntax)
+/// <param name="origin">The origin, when it is known from rows before the first one this builder reads (the rows of a
+/// file read in two ranges); null to take the first usable value read.</param>
+internal sealed class ResponseBuilder(string name, string? unit, MissingTokens missing, NumberSyntax syntax, ResponseOrigin? origin = null)
 {
     private readonly ColumnBuffer<double> _values = new();
     private readonly List<ExcludedRow> _excluded = [];
-    private decimal? _origin;
-    private (long Mantissa, int Scale)? _plainOrigin;
+    private decimal? _origin = origin?.Value;
+    private (long Mantissa, int Scale)? _plainOrigin = origin?.Plain;
     private int? _decimals;
     private bool _exponentSeen;
 
@@ -137,6 +139,25 @@ internal sealed class ResponseBuilder(string name, string? unit, MissingTokens m
             _values.Last = double.NaN;
             _excluded.Add(new ExcludedRow(line, code, reason));
         }
+    }
+
+    /// <summary>The origin, once a usable value has been read (it never changes afterwards).</summary>
+    public ResponseOrigin? Origin => _origin is { } value ? new ResponseOrigin(value, _plainOrigin) : null;
+
+    /// <summary>Takes over the rows of <paramref name="next"/>, which read the rows after this builder's with this
+    /// builder's origin (or, when this one has none, its own): the column is then what one builder reading all rows gives.</summary>
+    public void Append(ResponseBuilder next)
+    {
+        _values.Append(next._values);
+        _excluded.AddRange(next._excluded);
+        if (_origin is null)
+        {
+            (_origin, _plainOrigin) = (next._origin, next._plainOrigin);
+        }
+
+        _decimals = next._decimals is { } d ? Math.Max(_decimals ?? 0, d) : _decimals;
+        _exponentSeen |= next._exponentSeen;
+        Grouping ??= next.Grouping;
     }
 
     public ResponseColumn Build() => new(name, unit, (double)(_origin ?? 0m), _values.Detach()) { Decimals = _exponentSeen ? null : _decimals };

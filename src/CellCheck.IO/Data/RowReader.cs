@@ -9,90 +9,26 @@ internal static class RowReader
 {
     public static LoadResult<DesignData> Read(DesignFile design, ITableRows table)
     {
-        var path = design.DataPath;
         var columns = ColumnMap.Resolve(design, table.Header);
         if (columns.Problems.Count > 0)
         {
             return LoadResult<DesignData>.Failure(columns.Problems);
         }
 
-        var missing = new MissingTokens(design.Options.Missing);
-        var factorSpecs = design.Factors.Concat(design.Blocks).ToArray();
-        var factors = factorSpecs.Select(f => new LevelInterner(f.Name)).ToArray();
-        var responses = design.Responses.Select(r => new ResponseBuilder(r.Name, r.Unit, missing, table.Numbers)).ToArray();
-        var runOrder = columns.RunOrder is null ? null : new RunOrderBuilder(design.RunOrder!.Column, path, missing, table.Numbers);
-        var where = design.Options.Where.Conditions;
-        var lines = new ColumnBuffer<int>();
-        var filtered = 0;
+        var set = new ColumnSet(design, columns, table.Numbers);
         while (table.Next())
         {
-            var line = table.Line;
-            if (!Keep(table, columns.Where, where))
-            {
-                filtered++;
-                continue;
-            }
-
-            lines.Add(line);
-            if (columns.RunOrder is { } ro)
-            {
-                runOrder!.Add(table.Cell(ro), line);
-            }
-
-            string? missingFactor = null;
-            for (var f = 0; f < factors.Length; f++)
-            {
-                var text = table.Cell(columns.Factors[f]);
-                var isMissing = missing.IsMissing(text);
-                factors[f].Add(isMissing ? [] : text);
-                missingFactor ??= isMissing ? factorSpecs[f].Name : null;
-            }
-
-            for (var r = 0; r < responses.Length; r++)
-            {
-                if (missingFactor is not null)
-                {
-                    responses[r].Exclude(line, "missing-factor", $"missing value for {missingFactor}");
-                }
-                else
-                {
-                    responses[r].Add(table.Cell(columns.Responses[r]), line);
-                }
-            }
+            set.Take(table);
         }
 
-        if (table.Fault is { } fault)
-        {
-            return LoadResult<DesignData>.Failure(fault);
-        }
-
-        return Finish(design, table, columns, factors, responses, runOrder, lines, filtered);
+        return table.Fault is { } fault ? LoadResult<DesignData>.Failure(fault) : Finish(design, table, columns, set);
     }
 
-    private static bool Keep(ITableRows table, int[] columns, IReadOnlyList<WhereCondition> where)
-    {
-        for (var c = 0; c < where.Count; c++)
-        {
-            var text = table.Cell(columns[c]);
-            var match = false;
-            foreach (var value in where[c].Values)
-            {
-                match |= text.SequenceEqual(value.AsSpan().Trim());
-            }
-
-            if (!match)
-            {
-                return false;
-            }
-        }
-
-        return true;
-    }
-
-    private static LoadResult<DesignData> Finish(DesignFile design, ITableRows table, ColumnMap columns, LevelInterner[] factors,
-        ResponseBuilder[] responses, RunOrderBuilder? runOrder, ColumnBuffer<int> lines, int filtered)
+    /// <summary>The design's data from the columns read (or the first problem they show).</summary>
+    public static LoadResult<DesignData> Finish(DesignFile design, ITableRows table, ColumnMap columns, ColumnSet set)
     {
         var path = design.DataPath;
+        var (factors, responses, runOrder, lines, filtered) = (set.Factors, set.Responses, set.RunOrder, set.Lines, set.Filtered);
         for (var r = 0; r < responses.Length; r++)
         {
             if (responses[r].Grouping is { } g)

@@ -47,5 +47,12 @@ internal sealed class RunOrderBuilder(string column, string path, MissingTokens 
             "Write run positions as numbers (1, 2, 3, ...) or times as 2026-03-01T08:30:00.") { ColumnName = column };
     }
 
+    /// <summary>Takes over the rows of <paramref name="next"/>, which read the rows after this builder's.</summary>
+    public void Append(RunOrderBuilder next)
+    {
+        _values.Append(next._values);
+        Problem ??= next.Problem;
+    }
+
     public double[] Build() => _values.Detach();
 }

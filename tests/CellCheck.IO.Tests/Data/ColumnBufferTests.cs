@@ -21,4 +21,25 @@ public sealed class ColumnBufferTests
         Assert.Equal(0, buffer.Count);
         Assert.Empty(buffer.ToArray());
     }
+
+    [Fact]
+    public void Appending_a_column_moves_its_values_after_these_and_empties_it()
+    {
+        var (first, next) = (new ColumnBuffer<int>(), new ColumnBuffer<int>());
+        for (var i = 0; i < 70_000; i++)
+        {
+            first.Add(i);
+        }
+
+        for (var i = 70_000; i < 200_000; i++)
+        {
+            next.Add(i);
+        }
+
+        first.Append(next);
+        first.Append(new ColumnBuffer<int>());
+        first.Add(200_000);
+        Assert.Equal(0, next.Count);
+        Assert.Equal(Enumerable.Range(0, 200_001), first.Detach());
+    }
 }

@@ -23,8 +23,10 @@ public sealed class LargeFileScanTests
             stream.Write([(byte)'2', (byte)',', 0xE9, (byte)',', (byte)'3', (byte)'\n']); // é in Latin-1
         }
 
-        var result = DataReader.Read(DesignReader.Read(t.DesignPath).Value!);
+        var design = DesignReader.Read(t.DesignPath).Value!;
+        var result = DataReader.Read(design);
         Assert.False(result.Ok);
+        Assert.Equal(result.Problems, DataReader.Read(design, splitBytes: 0).Problems);
         var problem = Assert.Single(result.Problems);
         Assert.Equal(line + 1, problem.Line);
         Assert.Contains("UTF-8", problem.What, StringComparison.Ordinal);

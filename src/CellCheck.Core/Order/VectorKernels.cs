@@ -65,25 +65,4 @@ internal static class VectorKernels
             acc[j] += a * x[j];
         }
     }
-
-    /// <summary>Σ x_j y_j, with four vector accumulators (added in a fixed order, so the result is deterministic).</summary>
-    internal static double Dot(ReadOnlySpan<double> x, ReadOnlySpan<double> y)
-    {
-        var width = Vector<double>.Count;
-        Vector<double> s0 = Vector<double>.Zero, s1 = Vector<double>.Zero;
-        var j = 0;
-        for (; j <= x.Length - (2 * width); j += 2 * width)
-        {
-            s0 += new Vector<double>(x[j..]) * new Vector<double>(y[j..]);
-            s1 += new Vector<double>(x[(j + width)..]) * new Vector<double>(y[(j + width)..]);
-        }
-
-        var total = Vector.Sum(s0 + s1);
-        for (; j < x.Length; j++)
-        {
-            total += x[j] * y[j];
-        }
-
-        return total;
-    }
 }

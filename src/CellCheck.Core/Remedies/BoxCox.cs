@@ -65,12 +65,11 @@ public static class BoxCox
             throw new ArgumentException("the model leaves no residual degrees of freedom", nameof(rss));
         }
 
-        var logs = Logs(y);
         Func<double, double> profile = rss switch
         {
-            GroupedRss grouped => new GroupedPowerSums(grouped.Starts, logs).LogLikelihood,
-            SettingRss settings => new GroupedPowerSums(settings.Starts, Array.ConvertAll(settings.Permutation, i => logs[i]), settings.Between).LogLikelihood,
-            _ => l => LogLikelihood(rss, logs, l),
+            GroupedRss grouped => new GroupedPowerSums(grouped.Starts, Logs(y)).LogLikelihood,
+            SettingRss settings => new GroupedPowerSums(settings.Starts, Logs(y, settings.Permutation), settings.Between).LogLikelihood,
+            _ => ProfileOf(rss, Logs(y)),
         };
         var groups = rss switch { GroupedRss g => g.Starts.Length, SettingRss s => s.Starts.Length, _ => y.Length };
         var step = groups > CoarseGroups ? ProfileLikelihood.CoarseStep : ProfileLikelihood.GridStep;
@@ -107,17 +106,23 @@ public static class BoxCox
         return ((lambda - 1) * sumLog) - (n / 2.0 * (logRss - Math.Log(n)));
     }
 
-    private static double[] Logs(ReadOnlySpan<double> y)
+    private static Func<double, double> ProfileOf(IResidualSumOfSquares rss, double[] logs) => l => LogLikelihood(rss, logs, l);
+
+    private static double[] Logs(ReadOnlySpan<double> y) => Logs(y, null);
+
+    /// <summary>log y, in the order of <paramref name="order"/> when given (y[order[k]] at k).</summary>
+    private static double[] Logs(ReadOnlySpan<double> y, int[]? order)
     {
         var logs = new double[y.Length];
-        for (var i = 0; i < y.Length; i++)
+        for (var k = 0; k < y.Length; k++)
         {
+            var i = order is null ? k : order[k];
             if (!(y[i] > 0) || !double.IsFinite(y[i]))
             {
                 throw new ArgumentException($"Box-Cox needs positive finite values; value {i} is {y[i]}", nameof(y));
             }
 
-            logs[i] = Math.Log(y[i]);
+            logs[k] = Math.Log(y[i]);
         }
 
         return logs;

@@ -39,7 +39,13 @@ public static class RecordingStep
         }
 
         var tied = 0;
-        var scratch = new double[cells.Count];
+        var largest = 0;
+        for (var c = 0; c < cells.GroupCount; c++)
+        {
+            largest = Math.Max(largest, cells.Size(c));
+        }
+
+        var scratch = new double[largest]; // one cell at a time
         for (var c = 0; c < cells.GroupCount; c++)
         {
             var y = scratch.AsSpan(0, cells.Size(c));

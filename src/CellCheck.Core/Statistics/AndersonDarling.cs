@@ -50,23 +50,8 @@ public static class AndersonDarling
             {
                 RadixSort.Sort(sorted);
             }
-            if (SampleGuard.HasNoSpread(sorted[0], sorted[^1]))
-            {
-                return TestOutcome.NotTestable(NotTestableReason.ZeroSpread);
-            }
 
-            // Rescale extreme magnitudes (exact, by a power of two), then centre about the middle order statistic:
-            // x − x₍ₘ₎ is exact for values with many constant leading digits, so the standardised values are not
-            // rounded at the data's magnitude. Both keep the order and leave A² unchanged.
-            var scale = SampleGuard.ScaleFor(sorted);
-            var origin = sorted[sorted.Length / 2] * scale;
-            for (var i = 0; i < sorted.Length; i++)
-            {
-                sorted[i] = (sorted[i] * scale) - origin;
-            }
-
-            var a2 = Statistic(sorted);
-            return new TestOutcome(a2, PValue(ModifiedStatistic(a2, sorted.Length)));
+            return TestSortedInPlace(sorted);
         }
         finally
         {
@@ -104,6 +89,34 @@ public static class AndersonDarling
         }
 
         return Math.Clamp(p, 0.0, 1.0);
+    }
+
+    /// <summary>As <see cref="Test"/> for finite values already in ascending order, which it overwrites (rescaled and
+    /// centred): for a caller that holds a sorted copy it no longer needs, such as the pooled checks on millions of values.</summary>
+    internal static TestOutcome TestSortedInPlace(Span<double> sorted)
+    {
+        if (sorted.Length < 8)
+        {
+            return TestOutcome.NotTestable(NotTestableReason.TooFewValues);
+        }
+
+        if (SampleGuard.HasNoSpread(sorted[0], sorted[^1]))
+        {
+            return TestOutcome.NotTestable(NotTestableReason.ZeroSpread);
+        }
+
+        // Rescale extreme magnitudes (exact, by a power of two), then centre about the middle order statistic:
+        // x − x₍ₘ₎ is exact for values with many constant leading digits, so the standardised values are not
+        // rounded at the data's magnitude. Both keep the order and leave A² unchanged.
+        var scale = SampleGuard.ScaleFor(sorted);
+        var origin = sorted[sorted.Length / 2] * scale;
+        for (var i = 0; i < sorted.Length; i++)
+        {
+            sorted[i] = (sorted[i] * scale) - origin;
+        }
+
+        var a2 = Statistic(sorted);
+        return new TestOutcome(a2, PValue(ModifiedStatistic(a2, sorted.Length)));
     }
 
     private static double Statistic(ReadOnlySpan<double> x)

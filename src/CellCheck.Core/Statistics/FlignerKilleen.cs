@@ -57,10 +57,10 @@ public static class FlignerKilleen
             }
         }
 
-        var normalScores = new double[n];
-        TieAveragedRanks.Compute(scores, normalScores, TieUlps * (Math.BitIncrement(magnitude) - magnitude),
+        // the normal scores overwrite the deviations they are ranked from
+        TieAveragedRanks.Compute(scores, scores, TieUlps * (Math.BitIncrement(magnitude) - magnitude),
             rank => StandardNormal.Quantile((1.0 + (rank / (n + 1))) / 2.0));
-        var table = OneWayAnova.Compute(new GroupedValues(normalScores, part.Starts));
+        var table = OneWayAnova.Compute(new GroupedValues(scores, part.Starts));
         var total = table.SsBetween + table.SsWithin;
         if (!(total > 0))
         {

@@ -84,6 +84,40 @@ internal static class RadixSort
         }
     }
 
+    /// <summary>The order-preserving keys of <paramref name="values"/>, sorted, and in <paramref name="order"/> the index of
+    /// each sorted key's value (stable above the threshold; below it, equal values may come in any order). Read a
+    /// sorted value back with <see cref="ValueOf"/>. Allocates only the two buffers of the passes and the order.</summary>
+    public static ulong[] SortedKeys(ReadOnlySpan<double> values, out int[] order)
+    {
+        var n = values.Length;
+        var keys = new ulong[n];
+        order = new int[n];
+        for (var i = 0; i < n; i++)
+        {
+            keys[i] = Key(values[i]);
+            order[i] = i;
+        }
+
+        if (n < Threshold)
+        {
+            Array.Sort(keys, order);
+            return keys;
+        }
+
+        var spare = new ulong[n];
+        var carried = new int[n];
+        if (Passes(keys, spare, order, carried, n))
+        {
+            order = carried;
+            return spare;
+        }
+
+        return keys;
+    }
+
+    /// <summary>The value of a key made by this sort.</summary>
+    public static double ValueOf(ulong key) => Value(key);
+
     private static ulong Key(double value)
     {
         var bits = (ulong)BitConverter.DoubleToInt64Bits(value == 0 ? 0.0 : value); // −0 sorts with +0

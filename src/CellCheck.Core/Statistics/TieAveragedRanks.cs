@@ -9,23 +9,17 @@ internal static class TieAveragedRanks
     public static void Compute(ReadOnlySpan<double> x, Span<double> ranks, double tolerance = 0.0) => Compute(x, ranks, tolerance, null);
 
     /// <summary>As <see cref="Compute(ReadOnlySpan{double}, Span{double}, double)"/>, writing <paramref name="score"/> of each
-    /// mid-rank instead of the rank (evaluated once per run of ties).</summary>
+    /// mid-rank instead of the rank (evaluated once per run of ties). <paramref name="ranks"/> may be the memory of
+    /// <paramref name="x"/>: the values are read once, into the sort, before any rank is written.</summary>
     public static void Compute(ReadOnlySpan<double> x, Span<double> ranks, double tolerance, Func<double, double>? score)
     {
         var n = x.Length;
-        var keys = x.ToArray();
-        var order = new int[n];
-        for (var i = 0; i < n; i++)
-        {
-            order[i] = i;
-        }
-
-        RadixSort.Sort(keys, order);
+        var keys = RadixSort.SortedKeys(x, out var order);
         var start = 0;
         while (start < n)
         {
             var end = start + 1;
-            while (end < n && keys[end] - keys[start] <= tolerance)
+            while (end < n && RadixSort.ValueOf(keys[end]) - RadixSort.ValueOf(keys[start]) <= tolerance)
             {
                 end++;
             }

@@ -18,12 +18,14 @@ internal static class Phases
     {
         var clock = Stopwatch.StartNew();
         var last = 0.0;
+        var allocated = 0L;
         void Mark(string phase)
         {
             var now = clock.Elapsed.TotalSeconds;
             var live = GC.GetTotalMemory(true); // a full collection: the bytes still reachable after this phase
-            Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{phase,-14} {now - last,8:F3} s  (live {live / 1e6,7:F0} MB, peak working set {Process.GetCurrentProcess().PeakWorkingSet64 / 1e6,7:F0} MB)"));
+            Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{phase,-14} {now - last,8:F3} s  (allocated {(GC.GetTotalAllocatedBytes() - allocated) / 1e6,6:F0} MB, live {live / 1e6,7:F0} MB, peak working set {Process.GetCurrentProcess().PeakWorkingSet64 / 1e6,7:F0} MB)"));
             last = clock.Elapsed.TotalSeconds;
+            allocated = GC.GetTotalAllocatedBytes();
         }
 
         var file = DesignReader.Read(designPath).Value!;
@@ -63,7 +65,7 @@ internal static class Phases
         Mark("whole again");
         _ = RemedyAnalyzer.Analyze(data, 0, options, spec, report);
         Mark("remedy");
-        Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"GC pauses {GC.GetTotalPauseDuration().TotalSeconds:F2} s, collections gen0 {GC.CollectionCount(0)} gen1 {GC.CollectionCount(1)} gen2 {GC.CollectionCount(2)}, CPU {Process.GetCurrentProcess().TotalProcessorTime.TotalSeconds:F1} s"));
+        Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"GC pauses {GC.GetTotalPauseDuration().TotalSeconds:F2} s, allocated {GC.GetTotalAllocatedBytes() / 1e9:F1} GB, collections gen0 {GC.CollectionCount(0)} gen1 {GC.CollectionCount(1)} gen2 {GC.CollectionCount(2)}, CPU {Process.GetCurrentProcess().TotalProcessorTime.TotalSeconds:F1} s"));
         _ = model;
     }
 }

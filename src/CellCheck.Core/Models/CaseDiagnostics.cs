@@ -7,6 +7,21 @@ namespace CellCheck.Core.Models;
 /// </summary>
 internal static class CaseDiagnostics
 {
+    /// <summary>Rows per parallel work item of <see cref="ComputeInParallel"/>.</summary>
+    private const int Chunk = 1 << 18;
+
+    /// <summary>As <see cref="Compute"/>, over chunks of rows side by side (each row's values depend on that row only).</summary>
+    public static void ComputeInParallel(double[] e, double[] h, double rss, int df, int rank, double[] internalT, double[] externalT, double[] cooks)
+    {
+        Parallel.For(0, (e.Length + Chunk - 1) / Chunk, k =>
+        {
+            var from = k * Chunk;
+            var length = Math.Min(Chunk, e.Length - from);
+            Compute(e.AsSpan(from, length), h.AsSpan(from, length), rss, df, rank,
+                internalT.AsSpan(from, length), externalT.AsSpan(from, length), cooks.AsSpan(from, length));
+        });
+    }
+
     /// <summary>Fills the three arrays; rows whose leverage is exactly 1 get NaN in each.</summary>
     public static void Compute(ReadOnlySpan<double> e, ReadOnlySpan<double> h, double rss, int df, int rank,
         Span<double> internalT, Span<double> externalT, Span<double> cooks)

@@ -58,7 +58,7 @@ public sealed class CellBlockResiduals(IReadOnlyList<FactorColumn> blocks, Model
         var studentized = new double[n];
         var external = new double[n];
         var cooks = new double[n];
-        CaseDiagnostics.Compute(residuals, leverage, rss, df, fit.Rank, studentized, external, cooks);
+        CaseDiagnostics.ComputeInParallel(residuals, leverage, rss, df, fit.Rank, studentized, external, cooks);
         var s = df > 0 ? Math.Sqrt(rss / df) : double.NaN;
         var terms = spec.Terms.Select(t => t.Name(partition.Factors)).Concat(blocks.Select(b => b.Name)).ToArray();
         var info = new ModelInfo(name, terms, fit.Rank, fit.Rank, df, [], []) { Absorbed = true };

@@ -19,13 +19,15 @@ internal static class Phases
         var clock = Stopwatch.StartNew();
         var last = 0.0;
         var allocated = 0L;
+        var cpu = 0.0;
         void Mark(string phase)
         {
             var now = clock.Elapsed.TotalSeconds;
             var live = GC.GetTotalMemory(true); // a full collection: the bytes still reachable after this phase
-            Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{phase,-14} {now - last,8:F3} s  (allocated {(GC.GetTotalAllocatedBytes() - allocated) / 1e6,6:F0} MB, live {live / 1e6,7:F0} MB, peak working set {Process.GetCurrentProcess().PeakWorkingSet64 / 1e6,7:F0} MB)"));
+            Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{phase,-14} {now - last,8:F3} s  (CPU {Process.GetCurrentProcess().TotalProcessorTime.TotalSeconds - cpu,6:F2} s, allocated {(GC.GetTotalAllocatedBytes() - allocated) / 1e6,6:F0} MB, live {live / 1e6,7:F0} MB, peak working set {Process.GetCurrentProcess().PeakWorkingSet64 / 1e6,7:F0} MB)"));
             last = clock.Elapsed.TotalSeconds;
             allocated = GC.GetTotalAllocatedBytes();
+            cpu = Process.GetCurrentProcess().TotalProcessorTime.TotalSeconds;
         }
 
         var file = DesignReader.Read(designPath).Value!;

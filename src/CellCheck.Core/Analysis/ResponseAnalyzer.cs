@@ -25,6 +25,7 @@ public static class ResponseAnalyzer
         var census = CensusBuilder.Build(partition);
         var source = ResidualSources.For(data, spec, ModelName(data, spec));
         var residuals = source.Compute(partition);
+        var rows = partition.Values.Count;
         // the groups of checks are independent given the residuals: run them side by side (each writes only its own result)
         List<CellResult> cells = null!;
         SpreadResult spread = null!;
@@ -37,16 +38,33 @@ public static class ResponseAnalyzer
         Remedies.RemedyFits? remedyFits = null;
         var early = options.EarlyRemedy && partition.Values.Count > EarlyRemedyRows && residuals.Diagnostics is not null;
         Parallel.Invoke(
-            () => remedyFits = early ? Remedies.RemedyFits.Compute(data, spec, partition, residuals.Diagnostics!.Model, column, 0, wantsYeoJohnson: false) : null,
+            () =>
+            {
+                remedyFits = early ? Remedies.RemedyFits.Compute(data, spec, partition, residuals.Diagnostics!.Model, column, 0, wantsYeoJohnson: false) : null;
+                WorkingMemory.Release(rows);
+            },
             () => primary = calibration.MonteCarlo ? PrimaryDecisions.Statistics(partition, residuals, calibration) : null,
             () =>
             {
                 cells = CellChecks.Run(partition, residuals, column.Origin, options, column.Name);
                 spread = SpreadChecks.Run(partition, residuals, cells, options.Alpha);
+                WorkingMemory.Release(rows);
             },
-            () => pooled = PooledChecks.Run(residuals, options.Alpha),
-            () => order = OrderChecks.Run(data, partition, residuals, options.Alpha),
-            () => model = ModelChecks.Run(partition, data.Blocks, spec, residuals, data.SourceLines, options.Alpha),
+            () =>
+            {
+                pooled = PooledChecks.Run(residuals, options.Alpha);
+                WorkingMemory.Release(rows);
+            },
+            () =>
+            {
+                order = OrderChecks.Run(data, partition, residuals, options.Alpha);
+                WorkingMemory.Release(rows);
+            },
+            () =>
+            {
+                model = ModelChecks.Run(partition, data.Blocks, spec, residuals, data.SourceLines, options.Alpha);
+                WorkingMemory.Release(rows);
+            },
             () => resolution = RecordingStep.Summarize(partition.Values, column.Decimals, residuals.ResidualSd));
         var assumptions = PrimaryDecisions.Decide(partition, residuals, pooled, spread, order, calibration, options.Alpha, resolution, options.Simulation, primary);
         var verdict = VerdictWriter.Write(new VerdictInputs(census, cells, pooled, spread, partition.Factors, assumptions, calibration.Operating, model) { Resolution = resolution }, options);

@@ -47,11 +47,12 @@ internal static class SpreadChecks
         // the five tests read the same values and write nothing shared: run side by side
         var checks = new CheckResult[5];
         // each test holds a few copies of the values: above a million rows one at a time, to bound memory
-        Parallel.Invoke(new ParallelOptions { MaxDegreeOfParallelism = grouped.Count > 1_000_000 ? 1 : -1 },
-            () => checks[4] = CheckResults.From(CheckNames.FlignerKilleen, FlignerKilleen.Test(grouped), alpha),
-            () => checks[1] = CheckResults.From(CheckNames.BrownForsythe, BrownForsythe.Test(grouped), alpha),
-            () => checks[2] = CheckResults.From(CheckNames.BrownForsytheZerosRemoved, BrownForsytheZerosRemoved.Test(grouped), alpha),
-            () => checks[0] = CheckResults.From(CheckNames.Levene, Levene.Test(grouped), alpha),
+        var rows = grouped.Count;
+        Parallel.Invoke(new ParallelOptions { MaxDegreeOfParallelism = rows > WorkingMemory.ReleaseRows ? 1 : -1 },
+            () => checks[4] = Released(CheckResults.From(CheckNames.FlignerKilleen, FlignerKilleen.Test(grouped), alpha), rows),
+            () => checks[1] = Released(CheckResults.From(CheckNames.BrownForsythe, BrownForsythe.Test(grouped), alpha), rows),
+            () => checks[2] = Released(CheckResults.From(CheckNames.BrownForsytheZerosRemoved, BrownForsytheZerosRemoved.Test(grouped), alpha), rows),
+            () => checks[0] = Released(CheckResults.From(CheckNames.Levene, Levene.Test(grouped), alpha), rows),
             () => checks[3] = CheckResults.From(CheckNames.Bartlett, Bartlett.Test(grouped), alpha));
         if (checks[0].Reason == NotTestableReason.AllGroupsOfTwo)
         {
@@ -73,5 +74,12 @@ internal static class SpreadChecks
         }
 
         return new SpreadResult(used, checks, ratio, largest, smallest, notes);
+    }
+
+    /// <summary>The result, once the test's working copies are released (one test at a time on large data).</summary>
+    private static CheckResult Released(CheckResult result, int rows)
+    {
+        WorkingMemory.Release(rows);
+        return result;
     }
 }

@@ -37,7 +37,7 @@ public static class ResponseAnalyzer
         (double, double)? primary = null;
         Remedies.RemedyFits? remedyFits = null;
         var early = options.EarlyRemedy && partition.Values.Count > EarlyRemedyRows && residuals.Diagnostics is not null;
-        Parallel.Invoke(
+        Parallel.Invoke(new ParallelOptions { MaxDegreeOfParallelism = rows > WorkingMemory.ReleaseRows ? 2 : -1 },
             () =>
             {
                 remedyFits = early ? Remedies.RemedyFits.Compute(data, spec, partition, residuals.Diagnostics!.Model, column, 0, wantsYeoJohnson: false) : null;

@@ -32,7 +32,7 @@ internal static class OrderChecks
 
         var t = new double[use.Length];
         var e = new double[use.Length];
-        var byRow = ByRow(partition, residuals.Residuals, order.Length);
+        var byRow = RunOrderColumns.ByRow(partition, residuals.Residuals, order.Length);
         var ties = 0;
         for (var k = 0; k < use.Length; k++)
         {
@@ -54,7 +54,7 @@ internal static class OrderChecks
         Parallel.Invoke(
             () => dw = DurbinWatsonOf(data, partition, residuals, use, rows, e),
             () => signAndTrend = SignAndTrend(e, t, alpha),
-            () => byBlock = data.Blocks.Count == 0 ? [] : ByBlock(data, rows, e, t, alpha));
+            () => byBlock = data.Blocks.Count == 0 ? [] : BlockOrderChecks.Run(data, rows, e, t, alpha));
         if (dw is null)
         {
             checks.Add(CheckResults.NotTestable(CheckNames.DurbinWatson, NotTestableReason.TooManyValues));
@@ -78,7 +78,7 @@ internal static class OrderChecks
     {
         if (residuals.Diagnostics!.Absorbed is { } absorbed)
         {
-            var cellRun = CellsInRunOrder(partition, rows, data.RowCount);
+            var cellRun = RunOrderColumns.CellsInRunOrder(partition, rows, data.RowCount);
             var dummyRun = new int[absorbed.Dummy.Length][];
             var grouped = partition.GroupedCodes(data.Blocks);
             for (var j = 0; j < dummyRun.Length; j++)
@@ -103,14 +103,14 @@ internal static class OrderChecks
 
         if (residuals.Diagnostics!.Estimable is null && use.Length > ExactLimit)
         {
-            return GroupedDurbinWatson.Test(e, CellsInRunOrder(partition, rows, data.RowCount), partition.CellCount);
+            return GroupedDurbinWatson.Test(e, RunOrderColumns.CellsInRunOrder(partition, rows, data.RowCount), partition.CellCount);
         }
 
         var x = Design(partition, residuals, use);
         return x is null ? null : DurbinWatson.Test(e, x, DurbinWatsonAlternative.Positive, ExactLimit);
     }
 
-    private static List<CheckResult> SignAndTrend(ReadOnlySpan<double> e, ReadOnlySpan<double> t, double alpha)
+    internal static List<CheckResult> SignAndTrend(ReadOnlySpan<double> e, ReadOnlySpan<double> t, double alpha)
     {
         var runs = RunsTest.Test(e);
         var trend = OrderTrend.Test(e, t);
@@ -123,96 +123,6 @@ internal static class OrderChecks
                 ? new CheckResult(CheckNames.Trend, trend.Slope, [trend.Df], trend.P, null, StatusRules.FromP(trend.P, alpha), null)
                 : CheckResults.NotTestable(CheckNames.Trend, trend.Reason!),
         ];
-    }
-
-    /// <summary>A grouped-order column written out by data row (reads in order, writes scattered: cheaper than gathering).</summary>
-    private static double[] ByRow(CellPartition partition, double[] grouped, int rows)
-    {
-        var result = new double[rows];
-        var order = partition.RowOrder;
-        for (var i = 0; i < order.Length; i++)
-        {
-            result[order[i]] = grouped[i];
-        }
-
-        return result;
-    }
-
-    /// <summary>The cell of each used row, in run order.</summary>
-    private static int[] CellsInRunOrder(CellPartition partition, int[] rows, int rowCount)
-    {
-        var cellOfRow = new int[rowCount];
-        var starts = partition.Values.Starts;
-        for (var c = 0; c < partition.CellCount; c++)
-        {
-            for (var i = starts[c]; i < starts[c + 1]; i++)
-            {
-                cellOfRow[partition.RowOrder[i]] = c;
-            }
-        }
-
-        var result = new int[rows.Length];
-        for (var k = 0; k < rows.Length; k++)
-        {
-            result[k] = cellOfRow[rows[k]];
-        }
-
-        return result;
-    }
-
-    private static List<BlockOrderResult> ByBlock(DesignData data, int[] rows, double[] e, double[] t, double alpha)
-    {
-        var result = new List<BlockOrderResult>();
-        var block = data.Blocks[0];
-        var levels = block.Levels.Count;
-        var counts = new int[levels + 1];
-        var code = new int[rows.Length]; // each used row's level, read by row in run order
-        var contiguous = true; // each level's rows in one stretch of the run sequence (days logged in order)
-        for (var k = 0; k < rows.Length; k++)
-        {
-            code[k] = block.Codes[rows[k]];
-            contiguous &= k == 0 || code[k] == code[k - 1] || counts[code[k] + 1] == 0;
-            counts[code[k] + 1]++;
-        }
-
-        var first = new int[levels];
-        for (var k = rows.Length - 1; k >= 0; k--)
-        {
-            first[code[k]] = k;
-        }
-
-        for (var level = 0; level < levels; level++)
-        {
-            counts[level + 1] += counts[level];
-        }
-
-        // a stable counting sort of the run-ordered residuals by block level keeps run order within each level;
-        // when every level is one stretch already, each level is read in place
-        var (eb, tb) = contiguous ? (e, t) : (new double[rows.Length], new double[rows.Length]);
-        var next = (int[])counts.Clone();
-        for (var k = 0; k < rows.Length && !contiguous; k++)
-        {
-            var at = next[code[k]]++;
-            eb[at] = e[k];
-            tb[at] = t[k];
-        }
-
-        for (var level = 0; level < levels; level++)
-        {
-            var length = counts[level + 1] - counts[level];
-            if (length == 0)
-            {
-                continue;
-            }
-
-            var from = contiguous ? first[level] : counts[level];
-            var el = eb.AsSpan(from, length);
-            var tl = tb.AsSpan(from, length);
-            result.Add(new BlockOrderResult(block.Levels[level], length, length > 1 ? DurbinWatson.Statistic(el) : null,
-                length > 1 ? LagCorrelation.Lag1(el) : null, SignAndTrend(el, tl, alpha)));
-        }
-
-        return result;
     }
 
     /// <summary>The fitted model's full-rank design matrix for the used rows in run order (cell indicators for the cell-means fit).</summary>

@@ -149,75 +149,13 @@ public sealed class CellPartition
         var cellOfRow = new int[values.Length];
         var cellLevels = CellIndexer.Assign(factors, values, cellOfRow, out var cellCount);
 
-        // a stable counting sort by cell, in row ranges side by side: each range writes from its own offset within every
-        // cell (after the ranges before it), so the result is the one-pass sort's whatever the number of ranges
-        var ranges = cellOfRow.Length < ParallelRows ? 1 : SortRanges;
-        var offsets = new int[ranges][];
-        Parallel.For(0, ranges, part =>
-        {
-            var counts = offsets[part] = new int[cellCount];
-            foreach (var c in cellOfRow.AsSpan(RangeStart(part, ranges, cellOfRow.Length), RangeLength(part, ranges, cellOfRow.Length)))
-            {
-                if (c >= 0)
-                {
-                    counts[c]++;
-                }
-            }
-        });
-        var starts = new int[cellCount + 1];
-        for (var c = 0; c < cellCount; c++)
-        {
-            var at = starts[c];
-            for (var part = 0; part < ranges; part++)
-            {
-                (offsets[part][c], at) = (at, at + offsets[part][c]);
-            }
-
-            starts[c + 1] = at;
-        }
-
-        var rowOrder = new int[starts[^1]];
-        var grouped = new double[starts[^1]];
-        var blockCodes = new int[blocks.Count][];
         var blockSource = new int[blocks.Count][];
         for (var b = 0; b < blocks.Count; b++)
         {
-            blockCodes[b] = new int[rowOrder.Length];
             blockSource[b] = blocks[b].Codes;
         }
 
-        // block codes in grouped order too: read in row order, written scattered (cheaper than gathering later)
-        Parallel.For(0, ranges, part =>
-        {
-            var next = offsets[part];
-            var end = RangeStart(part, ranges, cellOfRow.Length) + RangeLength(part, ranges, cellOfRow.Length);
-            for (var row = RangeStart(part, ranges, cellOfRow.Length); row < end; row++)
-            {
-                var c = cellOfRow[row];
-                if (c < 0)
-                {
-                    continue;
-                }
-
-                var at = next[c]++;
-                rowOrder[at] = row;
-                grouped[at] = values[row];
-                for (var b = 0; b < blockCodes.Length; b++)
-                {
-                    blockCodes[b][at] = blockSource[b][row];
-                }
-            }
-        });
-
+        var (starts, rowOrder, grouped, blockCodes) = CellSort.Sort(cellOfRow, cellCount, values, blockSource);
         return new CellPartition(factors, cellLevels, rowOrder, new GroupedValues(grouped, starts), blocks, blockCodes);
     }
-
-    /// <summary>Rows above which the counting sort runs in <see cref="SortRanges"/> row ranges side by side.</summary>
-    private const int ParallelRows = 1 << 20;
-
-    private const int SortRanges = 4;
-
-    private static int RangeStart(int part, int ranges, int rows) => (int)((long)rows * part / ranges);
-
-    private static int RangeLength(int part, int ranges, int rows) => RangeStart(part + 1, ranges, rows) - RangeStart(part, ranges, rows);
 }

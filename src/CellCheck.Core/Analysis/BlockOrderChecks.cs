@@ -1,0 +1,64 @@
+using CellCheck.Core.Data;
+using CellCheck.Core.Order;
+
+namespace CellCheck.Core.Analysis;
+
+/// <summary>The order checks within each level of the first block factor: d, lag-1 correlation, runs and trend of that
+/// block's residuals in run order.</summary>
+internal static class BlockOrderChecks
+{
+    public static List<BlockOrderResult> Run(DesignData data, int[] rows, double[] e, double[] t, double alpha)
+    {
+        var result = new List<BlockOrderResult>();
+        var block = data.Blocks[0];
+        var levels = block.Levels.Count;
+        var counts = new int[levels + 1];
+        var code = new int[rows.Length]; // each used row's level, read by row in run order
+        var contiguous = true; // each level's rows in one stretch of the run sequence (days logged in order)
+        for (var k = 0; k < rows.Length; k++)
+        {
+            code[k] = block.Codes[rows[k]];
+            contiguous &= k == 0 || code[k] == code[k - 1] || counts[code[k] + 1] == 0;
+            counts[code[k] + 1]++;
+        }
+
+        var first = new int[levels];
+        for (var k = rows.Length - 1; k >= 0; k--)
+        {
+            first[code[k]] = k;
+        }
+
+        for (var level = 0; level < levels; level++)
+        {
+            counts[level + 1] += counts[level];
+        }
+
+        // a stable counting sort of the run-ordered residuals by block level keeps run order within each level;
+        // when every level is one stretch already, each level is read in place
+        var (eb, tb) = contiguous ? (e, t) : (new double[rows.Length], new double[rows.Length]);
+        var next = (int[])counts.Clone();
+        for (var k = 0; k < rows.Length && !contiguous; k++)
+        {
+            var at = next[code[k]]++;
+            eb[at] = e[k];
+            tb[at] = t[k];
+        }
+
+        for (var level = 0; level < levels; level++)
+        {
+            var length = counts[level + 1] - counts[level];
+            if (length == 0)
+            {
+                continue;
+            }
+
+            var from = contiguous ? first[level] : counts[level];
+            var el = eb.AsSpan(from, length);
+            var tl = tb.AsSpan(from, length);
+            result.Add(new BlockOrderResult(block.Levels[level], length, length > 1 ? DurbinWatson.Statistic(el) : null,
+                length > 1 ? LagCorrelation.Lag1(el) : null, OrderChecks.SignAndTrend(el, tl, alpha)));
+        }
+
+        return result;
+    }
+}

@@ -11,34 +11,42 @@ internal static class CaseDiagnostics
     private const int Chunk = 1 << 18;
 
     /// <summary>As <see cref="Compute"/>, over chunks of rows side by side (each row's values depend on that row only).</summary>
-    public static void ComputeInParallel(double[] e, double[] h, double rss, int df, int rank, double[] internalT, double[] externalT, double[] cooks)
+    public static void ComputeInParallel(double[] e, double[] h, double rss, int df, int rank, double[] internalT, double[] externalT, double[]? cooks)
     {
         Parallel.For(0, (e.Length + Chunk - 1) / Chunk, k =>
         {
             var from = k * Chunk;
             var length = Math.Min(Chunk, e.Length - from);
             Compute(e.AsSpan(from, length), h.AsSpan(from, length), rss, df, rank,
-                internalT.AsSpan(from, length), externalT.AsSpan(from, length), cooks.AsSpan(from, length));
+                internalT.AsSpan(from, length), externalT.AsSpan(from, length), cooks is null ? [] : cooks.AsSpan(from, length));
         });
     }
 
-    /// <summary>Fills the three arrays; rows whose leverage is exactly 1 get NaN in each.</summary>
+    /// <summary>Fills the three arrays (an empty one is skipped); rows whose leverage is exactly 1 get NaN in each.</summary>
     public static void Compute(ReadOnlySpan<double> e, ReadOnlySpan<double> h, double rss, int df, int rank,
         Span<double> internalT, Span<double> externalT, Span<double> cooks)
     {
         var sigma = df > 0 ? Math.Sqrt(rss / df) : double.NaN;
+        var (writeInternal, writeExternal, writeCooks) = (!internalT.IsEmpty, !externalT.IsEmpty, !cooks.IsEmpty);
         for (var i = 0; i < e.Length; i++)
         {
             if (h[i] == 1 || !(sigma > 0))
             {
-                internalT[i] = externalT[i] = cooks[i] = double.NaN;
+                Set(internalT, writeInternal, i, double.NaN);
+                Set(externalT, writeExternal, i, double.NaN);
+                Set(cooks, writeCooks, i, double.NaN);
                 continue;
             }
 
             var oneMinusH = 1 - h[i];
             var t = e[i] / (sigma * Math.Sqrt(oneMinusH));
-            internalT[i] = t;
-            cooks[i] = t * t * h[i] / (rank * oneMinusH);
+            Set(internalT, writeInternal, i, t);
+            Set(cooks, writeCooks, i, t * t * h[i] / (rank * oneMinusH));
+            if (!writeExternal)
+            {
+                continue;
+            }
+
             if (df < 2)
             {
                 externalT[i] = double.NaN;
@@ -48,6 +56,14 @@ internal static class CaseDiagnostics
             // Rounding can take the deleted sum of squares a little below 0 when row i carries nearly all of RSS.
             var deletedSs = Math.Max(0, rss - e[i] * e[i] / oneMinusH);
             externalT[i] = e[i] / (Math.Sqrt(deletedSs / (df - 1)) * Math.Sqrt(oneMinusH));
+        }
+    }
+
+    private static void Set(Span<double> target, bool write, int i, double value)
+    {
+        if (write)
+        {
+            target[i] = value;
         }
     }
 }

@@ -57,15 +57,21 @@ public sealed class CellBlockResiduals(IReadOnlyList<FactorColumn> blocks, Model
         var df = n - fit.Rank;
         var studentized = new double[n];
         var external = new double[n];
-        var cooks = new double[n];
-        CaseDiagnostics.ComputeInParallel(residuals, leverage, rss, df, fit.Rank, studentized, external, cooks);
+        CaseDiagnostics.ComputeInParallel(residuals, leverage, rss, df, fit.Rank, studentized, external, null);
+        double[] Cooks()
+        {
+            var cooks = new double[n]; // on first use: only per-row output reads them
+            CaseDiagnostics.Compute(residuals, leverage, rss, df, fit.Rank, [], [], cooks);
+            return cooks;
+        }
+
         var s = df > 0 ? Math.Sqrt(rss / df) : double.NaN;
         var terms = spec.Terms.Select(t => t.Name(partition.Factors)).Concat(blocks.Select(b => b.Name)).ToArray();
         var info = new ModelInfo(name, terms, fit.Rank, fit.Rank, df, [], []) { Absorbed = true };
         var plan = new CellBlockPlan(fit, partition.Values.Starts, leverage, codes);
         return new ResidualSet(name, residuals, fitted, studentized, s, df, plan)
         {
-            Diagnostics = new ResidualDiagnostics(leverage, external, cooks, info) { Absorbed = fit },
+            Diagnostics = new ResidualDiagnostics(leverage, external, Cooks, info) { Absorbed = fit },
         };
     }
 }

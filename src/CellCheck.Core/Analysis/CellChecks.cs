@@ -1,3 +1,4 @@
+using System.Buffers;
 using CellCheck.Core.Cells;
 using CellCheck.Core.Residuals;
 using CellCheck.Core.Statistics;
@@ -10,6 +11,8 @@ namespace CellCheck.Core.Analysis;
 /// </summary>
 internal static class CellChecks
 {
+    private const int PoolLimit = 1 << 16;
+
     public static List<CellResult> Run(CellPartition partition, ResidualSet residuals, double origin, AnalysisOptions options, string response)
     {
         var count = partition.CellCount;
@@ -21,8 +24,7 @@ internal static class CellChecks
         Parallel.For(0, count, c =>
         {
             var cell = residuals.WithinCellShift ? partition.Values.Group(c) : residuals.Residuals.AsSpan(starts[c], starts[c + 1] - starts[c]);
-            sw[c] = ShapiroWilk.Test(cell);
-            ad[c] = AndersonDarling.Test(cell);
+            (sw[c], ad[c]) = Normality(cell);
             moments[c] = Moments.Summarize(partition.Values.Group(c));
         });
 
@@ -41,6 +43,34 @@ internal static class CellChecks
         }
 
         return results;
+    }
+
+    /// <summary>Shapiro-Wilk and Anderson-Darling from one sorted copy of the cell (each test alone would sort its
+    /// own); Anderson-Darling runs last, in the copy.</summary>
+    private static (TestOutcome ShapiroWilk, TestOutcome AndersonDarling) Normality(ReadOnlySpan<double> cell)
+    {
+        // pooled for ordinary cells; a cell of millions of values gets its own copy (a pool would keep it alive)
+        var pooled = cell.Length <= PoolLimit;
+        var sorted = pooled ? ArrayPool<double>.Shared.Rent(cell.Length) : new double[cell.Length];
+        try
+        {
+            var span = sorted.AsSpan(0, cell.Length);
+            cell.CopyTo(span);
+            SampleGuard.RequireFinite(span, nameof(cell));
+            if (!RadixSort.IsAscending(span))
+            {
+                RadixSort.Sort(span);
+            }
+
+            return (ShapiroWilk.TestSorted(span), AndersonDarling.TestSortedInPlace(span));
+        }
+        finally
+        {
+            if (pooled)
+            {
+                ArrayPool<double>.Shared.Return(sorted);
+            }
+        }
     }
 
     private static double?[] Adjust(TestOutcome[] outcomes, AdjustMethod method)

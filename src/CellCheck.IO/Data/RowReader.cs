@@ -58,16 +58,38 @@ internal static class RowReader
             return LoadResult<DesignData>.Failure(numericProblems);
         }
 
-        var sourceLines = lines.Detach();
-        var built = factors.Select((f, i) => f.Build(i < design.Factors.Count && design.Factors[i].Kind == FactorKind.Numeric, table.Numbers)).ToArray();
+        // every column is finished on its own (levels put in order and codes renumbered, chunks joined): side by side
+        int[] sourceLines = null!;
+        double[]? order = null;
+        var built = new FactorColumn[factors.Length];
+        var values = new ResponseColumn[responses.Length];
+        var work = new List<Action> { () => sourceLines = lines.Detach() };
+        for (var i = 0; i < factors.Length; i++)
+        {
+            var f = i;
+            work.Add(() => built[f] = factors[f].Build(f < design.Factors.Count && design.Factors[f].Kind == FactorKind.Numeric, table.Numbers));
+        }
+
+        for (var i = 0; i < responses.Length; i++)
+        {
+            var r = i;
+            work.Add(() => values[r] = responses[r].Build());
+        }
+
+        if (design.RunOrder is not null && runOrder is not null)
+        {
+            work.Add(() => order = runOrder.Build());
+        }
+
+        Parallel.Invoke([.. work]);
         var data = new DesignData(
             built[..design.Factors.Count],
-            responses.Select(r => r.Build()).ToArray(),
+            values,
             sourceLines,
             responses.Select(r => r.Excluded).ToArray(),
             built[design.Factors.Count..])
         {
-            RunOrder = design.RunOrder is null ? null : runOrder?.Build() ?? Array.ConvertAll(sourceLines, l => (double)l),
+            RunOrder = design.RunOrder is null ? null : order ?? Array.ConvertAll(sourceLines, l => (double)l),
             RunOrderColumn = design.RunOrder?.Column,
             FilteredOut = filtered,
         };

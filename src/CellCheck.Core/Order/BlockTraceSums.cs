@@ -1,3 +1,5 @@
+using System.Runtime.CompilerServices;
+
 namespace CellCheck.Core.Order;
 
 /// <summary>
@@ -107,10 +109,12 @@ internal static class BlockTraceSums
         return (g, ww);
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)] // called several times per position
     private static int Degree(int t, int n) => (t > 0 ? 1 : 0) + (t < n - 1 ? 1 : 0);
 
     /// <summary>Adds weight·(z_a z_bᵀ) (and its transpose when <paramref name="symmetric"/>) to the indicator part and
     /// the cross table (the cell-mean part is added per cell).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)] // called several times per position
     private static void Pair(int[][] dummy, int a, int b, double weight, double[,] ee, double[] cross, int[] cell, int cells, bool symmetric = false)
     {
         foreach (var column in dummy)
@@ -141,6 +145,7 @@ internal static class BlockTraceSums
         }
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)] // called several times per position
     private static void Indicators(int[][] dummy, int t, double[] target, int offset, double weight)
     {
         foreach (var column in dummy)
@@ -152,6 +157,7 @@ internal static class BlockTraceSums
         }
     }
 
+    [MethodImpl(MethodImplOptions.AggressiveInlining)] // called several times per position
     private static void Add(double[] target, int c, double[] mean, int source, int p)
     {
         var row = target.AsSpan(c * p, p);

@@ -24,4 +24,32 @@ public sealed class RadixSortTests
         Assert.Equal(stable, payload);
         Assert.True(RadixSort.IsAscending(keys));
     }
+
+    [Theory]
+    [InlineData(1000)]
+    [InlineData(200_000)]
+    public void Sorted_keys_read_back_the_sorted_values_with_the_index_of_each(int n)
+    {
+        // both sides of the threshold (comparison sort below it, radix passes above); ties of rounded values included
+        var random = new Random(n);
+        var values = Enumerable.Range(0, n).Select(_ => Math.Round((random.NextDouble() - 0.5) * 2000) / 8).ToArray();
+        var keys = RadixSort.SortedKeys(values, out var order);
+        var sorted = keys.Select(RadixSort.ValueOf).ToArray();
+        Assert.Equal(values.OrderBy(v => v).ToArray(), sorted);
+        Assert.Equal(sorted, order.Select(i => values[i] == 0 ? 0.0 : values[i]).ToArray());
+        Assert.Equal(n, order.Distinct().Count());
+    }
+
+    [Fact]
+    public void Mid_ranks_may_be_written_over_the_values_they_are_ranked_from()
+    {
+        // Fligner-Killeen writes its scores over its deviations (common practice, no source)
+        var random = new Random(5);
+        var values = Enumerable.Range(0, 100_000).Select(_ => Math.Round(random.NextDouble() * 50)).ToArray();
+        var separate = new double[values.Length];
+        TieAveragedRanks.Compute(values, separate);
+        var inPlace = (double[])values.Clone();
+        TieAveragedRanks.Compute(inPlace, inPlace);
+        Assert.Equal(separate, inPlace);
+    }
 }

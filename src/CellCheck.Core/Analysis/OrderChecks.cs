@@ -80,16 +80,10 @@ internal static class OrderChecks
         {
             var cellRun = RunOrderColumns.CellsInRunOrder(partition, rows, data.RowCount);
             var dummyRun = new int[absorbed.Dummy.Length][];
-            var grouped = partition.GroupedCodes(data.Blocks);
             for (var j = 0; j < dummyRun.Length; j++)
             {
-                // the contrast column of each block level, read off the fit's grouped columns, then looked up by row
-                var contrast = new int[data.Blocks[j].Levels.Count];
-                for (var i = 0; i < grouped[j].Length; i++)
-                {
-                    contrast[grouped[j][i]] = absorbed.Dummy[j][i];
-                }
-
+                // the fit's contrast column of each block level, looked up by row in run order
+                var contrast = absorbed.LevelColumns[j];
                 var codes = data.Blocks[j].Codes;
                 var run = dummyRun[j] = new int[rows.Length];
                 for (var k = 0; k < rows.Length; k++)

@@ -36,35 +36,24 @@ public static class ResponseAnalyzer
         var calibration = Calibrator.Calibrate(residuals.NullPlan, options.Alpha, options.Simulation);
         (double, double)? primary = null;
         Remedies.RemedyFits? remedyFits = null;
-        var early = options.EarlyRemedy && partition.Values.Count > EarlyRemedyRows && residuals.Diagnostics is not null;
+        var early = options.EarlyRemedy && rows > EarlyRemedyRows && residuals.Diagnostics is not null;
+        // a finished group hands its working copies back (large data), so the next one reuses their memory
+        Action Releasing(Action step) => () =>
+        {
+            step();
+            WorkingMemory.Release(rows);
+        };
         Parallel.Invoke(new ParallelOptions { MaxDegreeOfParallelism = rows > WorkingMemory.ReleaseRows ? 2 : -1 },
-            () =>
-            {
-                remedyFits = early ? Remedies.RemedyFits.Compute(data, spec, partition, residuals.Diagnostics!.Model, column, 0, wantsYeoJohnson: false) : null;
-                WorkingMemory.Release(rows);
-            },
+            Releasing(() => remedyFits = early ? Remedies.RemedyFits.Compute(data, spec, partition, residuals.Diagnostics!.Model, column, 0, wantsYeoJohnson: false) : null),
             () => primary = calibration.MonteCarlo ? PrimaryDecisions.Statistics(partition, residuals, calibration) : null,
-            () =>
+            Releasing(() =>
             {
                 cells = CellChecks.Run(partition, residuals, column.Origin, options, column.Name);
                 spread = SpreadChecks.Run(partition, residuals, cells, options.Alpha);
-                WorkingMemory.Release(rows);
-            },
-            () =>
-            {
-                pooled = PooledChecks.Run(residuals, options.Alpha);
-                WorkingMemory.Release(rows);
-            },
-            () =>
-            {
-                order = OrderChecks.Run(data, partition, residuals, options.Alpha);
-                WorkingMemory.Release(rows);
-            },
-            () =>
-            {
-                model = ModelChecks.Run(partition, data.Blocks, spec, residuals, data.SourceLines, options.Alpha);
-                WorkingMemory.Release(rows);
-            },
+            }),
+            Releasing(() => pooled = PooledChecks.Run(residuals, options.Alpha)),
+            Releasing(() => order = OrderChecks.Run(data, partition, residuals, options.Alpha)),
+            Releasing(() => model = ModelChecks.Run(partition, data.Blocks, spec, residuals, data.SourceLines, options.Alpha)),
             () => resolution = RecordingStep.Summarize(partition.Values, column.Decimals, residuals.ResidualSd));
         var assumptions = PrimaryDecisions.Decide(partition, residuals, pooled, spread, order, calibration, options.Alpha, resolution, options.Simulation, primary);
         var verdict = VerdictWriter.Write(new VerdictInputs(census, cells, pooled, spread, partition.Factors, assumptions, calibration.Operating, model) { Resolution = resolution }, options);

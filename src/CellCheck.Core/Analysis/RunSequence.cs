@@ -11,13 +11,6 @@ namespace CellCheck.Core.Analysis;
 /// </summary>
 internal static class RunSequence
 {
-    public static (int[] Use, int Missing) Used(double[] order, CellPartition partition, double[] leverage)
-    {
-        var (use, _, missing) = UsedRows(order, partition, leverage);
-        return (use, missing);
-    }
-
-    /// <summary>As <see cref="Used"/>, with the data row of each position.</summary>
     public static (int[] Use, int[] Rows, int Missing) UsedRows(double[] order, CellPartition partition, double[] leverage)
     {
         var rows = order.Length;

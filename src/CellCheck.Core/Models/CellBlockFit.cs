@@ -52,6 +52,10 @@ internal sealed class CellBlockFit
     /// <summary>Per block factor, the block-contrast column of each unit (−1 for the factor's first level).</summary>
     public int[][] Dummy => dummy;
 
+    /// <summary>Per block factor, the block-contrast column of each level code (−1 for the first level present and for
+    /// codes no unit has): what <see cref="Dummy"/> holds, by level instead of by unit.</summary>
+    public int[][] LevelColumns { get; private init; } = [];
+
     /// <summary>Number of block-contrast columns.</summary>
     public int P { get; }
 
@@ -70,6 +74,7 @@ internal sealed class CellBlockFit
     {
         var units = starts[^1];
         var dummy = new int[blockCodes.Count][];
+        var levelColumns = new int[blockCodes.Count][];
         var p = 0;
         for (var j = 0; j < blockCodes.Count; j++)
         {
@@ -87,7 +92,7 @@ internal sealed class CellBlockFit
                 present[code] = true;
             }
 
-            var column = new int[largest + 1];
+            var column = levelColumns[j] = new int[largest + 1];
             var reference = true; // the lowest present code is the reference level (no column)
             for (var code = 0; code <= largest; code++)
             {
@@ -103,56 +108,25 @@ internal sealed class CellBlockFit
         }
 
         var cells = starts.Length - 1;
-        var cellWeight = new double[cells];
-        var cellMeanX = new double[cells * p];
-        var c2 = new double[p, p];
+        var centred = new CentredBlockColumns(cells, p);
         for (var c = 0; c < cells; c++)
         {
             for (var i = starts[c]; i < starts[c + 1]; i++)
             {
-                var w = weights?[i] ?? 1.0;
-                cellWeight[c] += w;
-                for (var j = 0; j < dummy.Length; j++)
-                {
-                    var a = dummy[j][i];
-                    if (a < 0)
-                    {
-                        continue;
-                    }
-
-                    cellMeanX[(c * p) + a] += w;
-                    for (var k = 0; k < dummy.Length; k++)
-                    {
-                        var b = dummy[k][i];
-                        if (b >= 0)
-                        {
-                            c2[a, b] += w;
-                        }
-                    }
-                }
+                centred.Add(c, dummy, i, weights?[i] ?? 1.0);
             }
 
-            for (var a = 0; a < p && cellWeight[c] > 0; a++)
-            {
-                cellMeanX[(c * p) + a] /= cellWeight[c];
-            }
-
-            for (var a = 0; a < p; a++)
-            {
-                for (var b = 0; b < p; b++)
-                {
-                    c2[a, b] -= cellWeight[c] * cellMeanX[(c * p) + a] * cellMeanX[(c * p) + b];
-                }
-            }
+            centred.FinishCell(c);
         }
 
+        var (cellWeight, cellMeanX, c2) = (centred.Weight, centred.Mean, centred.C);
         if (p == 0)
         {
-            return new CellBlockFit(starts, dummy, weights, 0, cellWeight, cellMeanX, new double[0, 0]);
+            return new CellBlockFit(starts, dummy, weights, 0, cellWeight, cellMeanX, new double[0, 0]) { LevelColumns = levelColumns };
         }
 
         var matrix = Matrix<double>.Build.DenseOfArray(c2);
-        return Estimable(matrix) ? new CellBlockFit(starts, dummy, weights, p, cellWeight, cellMeanX, matrix.Inverse().ToArray()) : null;
+        return Estimable(matrix) ? new CellBlockFit(starts, dummy, weights, p, cellWeight, cellMeanX, matrix.Inverse().ToArray()) { LevelColumns = levelColumns } : null;
     }
 
     /// <summary>True when the reduced normal-equation matrix C (symmetric, p ≥ 1) is safely positive definite: its

@@ -26,46 +26,18 @@ public static class CellBlockDurbinWatson
         var n = residuals.Length;
         (double TraceMA, double TraceMA2, int Groups) traces = default;
         var tracing = Task.Run(() => traces = GroupedDurbinWatson.Traces(cell, cells));
-        var size = new double[cells];
-        var mean = new double[cells * p];
-        var c = new double[p, p];
+        var centred = new CentredBlockColumns(cells, p);
         for (var t = 0; t < n; t++)
         {
-            size[cell[t]]++;
-            foreach (var column in dummy)
-            {
-                if (column[t] < 0)
-                {
-                    continue;
-                }
-
-                mean[(cell[t] * p) + column[t]]++;
-                foreach (var other in dummy)
-                {
-                    if (other[t] >= 0)
-                    {
-                        c[column[t], other[t]]++;
-                    }
-                }
-            }
+            centred.Add(cell[t], dummy, t, 1.0);
         }
 
         for (var g = 0; g < cells; g++)
         {
-            for (var a = 0; a < p && size[g] > 0; a++)
-            {
-                mean[(g * p) + a] /= size[g];
-            }
-
-            for (var a = 0; a < p; a++)
-            {
-                for (var b = 0; b < p; b++)
-                {
-                    c[a, b] -= size[g] * mean[(g * p) + a] * mean[(g * p) + b];
-                }
-            }
+            centred.FinishCell(g);
         }
 
+        var (size, mean, c) = (centred.Weight, centred.Mean, centred.C);
         if (p == 0)
         {
             return GroupedDurbinWatson.Test(residuals, cell, cells, alternative);

@@ -48,21 +48,4 @@ internal static class VectorKernels
             r[j] -= (a * x[j]) + (b * y[j]);
         }
     }
-
-    /// <summary>acc_j ← acc_j + a·x_j for every j (one row of a rank-one update).</summary>
-    internal static void AddScaled(Span<double> acc, double a, ReadOnlySpan<double> x)
-    {
-        var width = Vector<double>.Count;
-        var va = new Vector<double>(a);
-        var j = 0;
-        for (; j <= x.Length - width; j += width)
-        {
-            (new Vector<double>(acc[j..]) + (va * new Vector<double>(x[j..]))).CopyTo(acc[j..]);
-        }
-
-        for (; j < x.Length; j++)
-        {
-            acc[j] += a * x[j];
-        }
-    }
 }

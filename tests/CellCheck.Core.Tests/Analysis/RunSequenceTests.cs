@@ -28,11 +28,12 @@ public sealed class RunSequenceTests
         order[7] = double.NaN;
         var leverage = new double[n];
         leverage[11] = 1.0; // a row fitted exactly is left out
-        var (use, missing) = RunSequence.Used(order, partition, leverage);
+        var (use, rows, missing) = RunSequence.UsedRows(order, partition, leverage);
         var expected = Enumerable.Range(0, n)
             .Where(i => !double.IsNaN(order[partition.RowOrder[i]]) && leverage[i] < 1)
             .OrderBy(i => order[partition.RowOrder[i]]).ThenBy(i => partition.RowOrder[i]).ToArray();
         Assert.Equal(1, missing);
         Assert.Equal(expected, use);
+        Assert.Equal(expected.Select(i => partition.RowOrder[i]).ToArray(), rows);
     }
 }

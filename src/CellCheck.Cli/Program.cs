@@ -4,7 +4,11 @@ namespace CellCheck.Cli;
 
 internal static class Program
 {
-    private static int Main(string[] args) => Run(args, Console.Out, Console.Error);
+    private static int Main(string[] args)
+    {
+        HeapPages.Advise();
+        return Run(args, Console.Out, Console.Error);
+    }
 
     /// <summary>Parses and runs a command line; usage errors give exit code 2, a bug gives 3 with a short message.</summary>
     internal static int Run(string[] args, TextWriter output, TextWriter error)

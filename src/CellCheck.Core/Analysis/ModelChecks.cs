@@ -35,7 +35,7 @@ internal static class ModelChecks
         {
             var rss = residuals.ResidualSd * residuals.ResidualSd * residuals.ResidualDf;
             checks.Add(CheckResults.From(CheckNames.TukeyNonadditivity,
-                TukeyNonadditivity.Test(residuals.Residuals, residuals.Fitted, rss, residuals.ResidualDf, absorbed), alpha));
+                TukeyNonadditivity.Test(residuals.Residuals, partition.Values.Values, rss, residuals.ResidualDf, absorbed), alpha));
             checks.Add(CheckResults.From(CheckNames.LackOfFit, LackOfFit.Test(residuals.ResidualDf, rss, partition.Values.Values, settings), alpha));
         }
         else
@@ -45,7 +45,7 @@ internal static class ModelChecks
             checks.Add(CheckResults.NotTestable(CheckNames.LackOfFit, NotTestableReason.SaturatedModel));
         }
 
-        var screen = OutlierScreen.Screen(diagnostics.StudentizedExternal, residuals.ResidualDf, out var screened);
+        var screen = OutlierScreen.Screen(diagnostics.StudentizedExternalOnce(), residuals.ResidualDf, out var screened);
         var outliers = screen.Where(s => s.PAdjusted < alpha)
             .Select(s => new OutlierRow(sourceLines[partition.RowOrder[s.Row]], s.T, s.PAdjusted)).ToList();
         checks.Add(screened == 0

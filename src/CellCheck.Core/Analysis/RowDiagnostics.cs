@@ -4,19 +4,20 @@ namespace CellCheck.Core.Analysis;
 /// externally studentized residuals, leverage and Cook's distance (NaN where leverage is one), and the run position
 /// (null when no run order was declared; NaN where missing).</summary>
 /// <remarks>The columns that are copies of the data in cell order (lines, cells, fitted values on the response scale,
-/// run positions, block codes) and Cook's distances are built on first use, so a run that writes no per-row output (JSON report only)
+/// run positions, block codes), externally studentized residuals and Cook's distances are built on first use, so a run that writes no per-row output (JSON report only)
 /// holds no per-row copy of them: at ten million rows that is several hundred megabytes.</remarks>
 public sealed class RowDiagnostics
 {
     private readonly Lazy<int[]> lines;
     private readonly Lazy<int[]> cells;
     private readonly Lazy<double[]> fitted;
+    private readonly Lazy<double[]> studentizedExternal;
     private readonly Lazy<double[]> cooksDistance;
     private readonly Lazy<double[]?> runOrder;
     private readonly Lazy<IReadOnlyList<int[]>> blockCodes;
 
     public RowDiagnostics(Func<int[]> lines, Func<int[]> cells, Func<double[]> fitted, double[] residuals, double[] studentized,
-        double[] studentizedExternal, double[] leverage, Func<double[]> cooksDistance, Func<double[]?> runOrder, Func<IReadOnlyList<int[]>> blockCodes)
+        Func<double[]> studentizedExternal, double[] leverage, Func<double[]> cooksDistance, Func<double[]?> runOrder, Func<IReadOnlyList<int[]>> blockCodes)
     {
         this.lines = new Lazy<int[]>(lines);
         this.cells = new Lazy<int[]>(cells);
@@ -25,7 +26,7 @@ public sealed class RowDiagnostics
         this.blockCodes = new Lazy<IReadOnlyList<int[]>>(blockCodes);
         Residuals = residuals;
         Studentized = studentized;
-        StudentizedExternal = studentizedExternal;
+        this.studentizedExternal = new Lazy<double[]>(studentizedExternal);
         Leverage = leverage;
         this.cooksDistance = new Lazy<double[]>(cooksDistance);
     }
@@ -40,7 +41,7 @@ public sealed class RowDiagnostics
 
     public double[] Studentized { get; }
 
-    public double[] StudentizedExternal { get; }
+    public double[] StudentizedExternal => studentizedExternal.Value;
 
     public double[] Leverage { get; }
 

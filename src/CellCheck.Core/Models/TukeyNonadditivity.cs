@@ -25,18 +25,20 @@ public static class TukeyNonadditivity
         return FromProjection(fit.Residuals, squared, z, fit.ResidualSumOfSquares, fit.ResidualDf);
     }
 
-    /// <summary>The same test for a fit given by its residualizing map (the absorbed cells-plus-blocks fit).</summary>
-    internal static TestOutcome Test(double[] residuals, double[] fitted, double rss, int residualDf, CellBlockFit fit)
+    /// <summary>The same test for a fit given by its residualizing map (the absorbed cells-plus-blocks fit), with the
+    /// fitted values taken as value minus residual.</summary>
+    internal static TestOutcome Test(double[] residuals, double[] values, double rss, int residualDf, CellBlockFit fit)
     {
         if (residualDf < 2)
         {
             return TestOutcome.NotTestable(NotTestableReason.NoResidualDegreesOfFreedom);
         }
 
-        var squared = new double[fitted.Length];
+        var squared = new double[values.Length];
         for (var i = 0; i < squared.Length; i++)
         {
-            squared[i] = fitted[i] * fitted[i];
+            var fitted = values[i] - residuals[i];
+            squared[i] = fitted * fitted;
         }
 
         var z = new double[squared.Length];

@@ -32,7 +32,6 @@ public sealed class CellBlockResiduals(IReadOnlyList<FactorColumn> blocks, Model
         var n = y.Length;
         var residuals = new double[n];
         fit.Residualize(y, residuals);
-        var fitted = new double[n];
         var leverage = new double[n];
         var cellRss = new double[partition.CellCount];
         // cells in parallel, each into its own slots; the sum of squares is then added in cell order (deterministic)
@@ -41,7 +40,6 @@ public sealed class CellBlockResiduals(IReadOnlyList<FactorColumn> blocks, Model
             var sum = 0.0;
             for (var i = partition.Values.Starts[c]; i < partition.Values.Starts[c + 1]; i++)
             {
-                fitted[i] = y[i] - residuals[i];
                 leverage[i] = fit.Leverage(c, i);
                 sum += residuals[i] * residuals[i];
             }
@@ -56,11 +54,29 @@ public sealed class CellBlockResiduals(IReadOnlyList<FactorColumn> blocks, Model
 
         var df = n - fit.Rank;
         var studentized = new double[n];
-        var external = new double[n];
-        CaseDiagnostics.ComputeInParallel(residuals, leverage, rss, df, fit.Rank, studentized, external, null);
+        CaseDiagnostics.ComputeInParallel(residuals, leverage, rss, df, fit.Rank, studentized, null, null);
+        // fitted values, externally studentized residuals and Cook's distances on first use: only per-row output keeps them
+        double[] Fitted()
+        {
+            var fitted = new double[n];
+            for (var i = 0; i < n; i++)
+            {
+                fitted[i] = y[i] - residuals[i];
+            }
+
+            return fitted;
+        }
+
+        double[] External()
+        {
+            var external = new double[n];
+            CaseDiagnostics.ComputeInParallel(residuals, leverage, rss, df, fit.Rank, null, external, null);
+            return external;
+        }
+
         double[] Cooks()
         {
-            var cooks = new double[n]; // on first use: only per-row output reads them
+            var cooks = new double[n];
             CaseDiagnostics.Compute(residuals, leverage, rss, df, fit.Rank, [], [], cooks);
             return cooks;
         }
@@ -69,9 +85,9 @@ public sealed class CellBlockResiduals(IReadOnlyList<FactorColumn> blocks, Model
         var terms = spec.Terms.Select(t => t.Name(partition.Factors)).Concat(blocks.Select(b => b.Name)).ToArray();
         var info = new ModelInfo(name, terms, fit.Rank, fit.Rank, df, [], []) { Absorbed = true };
         var plan = new CellBlockPlan(fit, partition.Values.Starts, leverage, codes);
-        return new ResidualSet(name, residuals, fitted, studentized, s, df, plan)
+        return new ResidualSet(name, residuals, Fitted, studentized, s, df, plan)
         {
-            Diagnostics = new ResidualDiagnostics(leverage, external, Cooks, info) { Absorbed = fit },
+            Diagnostics = new ResidualDiagnostics(leverage, External, Cooks, info) { Absorbed = fit },
         };
     }
 }

@@ -49,7 +49,7 @@ public sealed class CellMeansResiduals(string? note = null) : IResidualSource
         }
 
         var plan = new CellMeansPlan(new DesignShape(Enumerable.Range(0, grouped.GroupCount).Select(grouped.Size)));
-        return new ResidualSet(Name, residuals, fitted, studentized, s, df, plan, WithinCellShift: true)
+        return new ResidualSet(Name, residuals, fitted, studentized, s, df, plan, withinCellShift: true)
         {
             Diagnostics = Diagnose(partition, residuals, ss, df),
         };

@@ -7,25 +7,38 @@ namespace CellCheck.Core.Residuals;
 /// residuals and Cook's distance (NaN where leverage is one), with the model description, and, for a general
 /// linear model, its design matrix and fit.
 /// </summary>
-public sealed record ResidualDiagnostics(double[] Leverage, double[] StudentizedExternal, ModelInfo Model)
+/// <remarks>Externally studentized residuals and Cook's distances may be given as ways to compute them: they are then
+/// formed on first use (only per-row output keeps them), so a large check that writes none never holds them.</remarks>
+public sealed record ResidualDiagnostics
 {
-    private readonly Lazy<double[]> cooksDistance = new(() => []);
+    private readonly Func<double[]> externalSource;
+    private readonly Lazy<double[]> studentizedExternal;
+    private readonly Lazy<double[]> cooksDistance;
 
     public ResidualDiagnostics(double[] leverage, double[] studentizedExternal, double[] cooksDistance, ModelInfo model)
-        : this(leverage, studentizedExternal, () => cooksDistance, model)
+        : this(leverage, () => studentizedExternal, () => cooksDistance, model)
     {
     }
 
-    /// <summary>Diagnostics whose Cook's distances are computed on first use (only per-row output reads them: a large
-    /// check that writes none never holds them).</summary>
-    public ResidualDiagnostics(double[] leverage, double[] studentizedExternal, Func<double[]> cooksDistance, ModelInfo model)
-        : this(leverage, studentizedExternal, model)
+    public ResidualDiagnostics(double[] leverage, Func<double[]> studentizedExternal, Func<double[]> cooksDistance, ModelInfo model)
     {
+        Leverage = leverage;
+        externalSource = studentizedExternal;
+        this.studentizedExternal = new Lazy<double[]>(studentizedExternal);
         this.cooksDistance = new Lazy<double[]>(cooksDistance);
+        Model = model;
     }
+
+    /// <summary>Leverage (hat value) of each row.</summary>
+    public double[] Leverage { get; }
+
+    /// <summary>Externally studentized residual of each row (NaN where leverage is one).</summary>
+    public double[] StudentizedExternal => studentizedExternal.Value;
 
     /// <summary>Cook's distance of each row (NaN where leverage is one).</summary>
     public double[] CooksDistance => cooksDistance.Value;
+
+    public ModelInfo Model { get; }
 
     /// <summary>The design matrix (null for the cell-means fast path).</summary>
     public DesignMatrix? Design { get; init; }
@@ -38,4 +51,8 @@ public sealed record ResidualDiagnostics(double[] Leverage, double[] Studentized
 
     /// <summary>The full-rank design matrix actually fitted: the estimable columns in order (null for cell means).</summary>
     public double[,]? Estimable { get; init; }
+
+    /// <summary>The externally studentized residuals for one reading: those kept if already formed, else a fresh
+    /// copy that is not kept (the outlier screen reads them once; per-row output keeps them).</summary>
+    internal double[] StudentizedExternalOnce() => studentizedExternal.IsValueCreated ? studentizedExternal.Value : externalSource();
 }

@@ -11,9 +11,47 @@ namespace CellCheck.Core.Residuals;
 /// so exact ties in the data stay exact (rank-based tests depend on them). <see cref="NullPlan"/> tells the
 /// calibration how to simulate this model's residuals under the null.
 /// </summary>
-public sealed record ResidualSet(string Model, double[] Residuals, double[] Fitted, double[] Studentized, double ResidualSd, int ResidualDf,
-    INullPlan NullPlan, bool WithinCellShift = false)
+/// <remarks>Fitted values may be given as a way to compute them (value minus residual): they are formed on first
+/// use, so a large check that writes no per-row output never holds them.</remarks>
+public sealed record ResidualSet
 {
+    private readonly Lazy<double[]> fitted;
+
+    public ResidualSet(string model, double[] residuals, double[] fitted, double[] studentized, double residualSd, int residualDf,
+        INullPlan nullPlan, bool withinCellShift = false)
+        : this(model, residuals, () => fitted, studentized, residualSd, residualDf, nullPlan, withinCellShift)
+    {
+    }
+
+    public ResidualSet(string model, double[] residuals, Func<double[]> fitted, double[] studentized, double residualSd, int residualDf,
+        INullPlan nullPlan, bool withinCellShift = false)
+    {
+        Model = model;
+        Residuals = residuals;
+        this.fitted = new Lazy<double[]>(fitted);
+        Studentized = studentized;
+        ResidualSd = residualSd;
+        ResidualDf = residualDf;
+        NullPlan = nullPlan;
+        WithinCellShift = withinCellShift;
+    }
+
+    public string Model { get; }
+
+    public double[] Residuals { get; }
+
+    public double[] Fitted => fitted.Value;
+
+    public double[] Studentized { get; }
+
+    public double ResidualSd { get; }
+
+    public int ResidualDf { get; }
+
+    public INullPlan NullPlan { get; }
+
+    public bool WithinCellShift { get; }
+
     /// <summary>Leverage, external studentized residuals, Cook's distance and the model description.</summary>
     public ResidualDiagnostics? Diagnostics { get; init; }
 }

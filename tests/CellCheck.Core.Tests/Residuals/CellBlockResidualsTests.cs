@@ -49,7 +49,7 @@ public sealed class CellBlockResidualsTests
     [Theory]
     [InlineData(1, 1)]
     [InlineData(2, 2)]
-    public void Residuals_leverage_and_studentized_residuals_equal_the_dense_fit(int seed, int blockFactors)
+    public void Residuals_fitted_values_leverage_and_both_studentized_residuals_equal_the_dense_fit(int seed, int blockFactors)
     {
         var (partition, blocks, spec, _) = Design(seed, blockFactors);
         var dense = new ModelResiduals(blocks, spec, "m").Compute(partition);
@@ -63,7 +63,21 @@ public sealed class CellBlockResidualsTests
             Assert.Equal(dense.Diagnostics!.Leverage[i], absorbed.Diagnostics.Leverage[i], 1e-9);
             Assert.Equal(dense.Studentized[i], absorbed.Studentized[i], 1e-8);
             Assert.Equal(dense.Diagnostics.CooksDistance[i], absorbed.Diagnostics.CooksDistance[i], 1e-9);
+            Assert.Equal(dense.Diagnostics.StudentizedExternal[i], absorbed.Diagnostics.StudentizedExternal[i], 1e-8);
+            Assert.Equal(dense.Fitted[i], absorbed.Fitted[i], 1e-9);
         }
+    }
+
+    [Fact]
+    public void External_studentized_residuals_read_once_are_not_kept_until_per_row_output_asks_for_them()
+    {
+        var (partition, blocks, spec, _) = Design(4, 1);
+        var diagnostics = new CellBlockResiduals(blocks, spec, "m", new ModelResiduals(blocks, spec, "m")).Compute(partition).Diagnostics!;
+        var once = diagnostics.StudentizedExternalOnce();
+        Assert.NotSame(once, diagnostics.StudentizedExternalOnce());
+        var kept = diagnostics.StudentizedExternal;
+        Assert.Equal(once, kept);
+        Assert.Same(kept, diagnostics.StudentizedExternalOnce());
     }
 
     [Fact]
@@ -74,7 +88,7 @@ public sealed class CellBlockResidualsTests
         var absorbed = new CellBlockResiduals(blocks, spec, "m", new ModelResiduals(blocks, spec, "m")).Compute(partition);
         var denseTukey = TukeyNonadditivity.Test(dense.Diagnostics!.Estimable!, dense.Diagnostics.Fit!);
         var rss = absorbed.ResidualSd * absorbed.ResidualSd * absorbed.ResidualDf;
-        var tukey = TukeyNonadditivity.Test(absorbed.Residuals, absorbed.Fitted, rss, absorbed.ResidualDf, absorbed.Diagnostics!.Absorbed!);
+        var tukey = TukeyNonadditivity.Test(absorbed.Residuals, partition.Values.Values, rss, absorbed.ResidualDf, absorbed.Diagnostics!.Absorbed!);
         Assert.Equal(denseTukey.Statistic, tukey.Statistic, 1e-9 * denseTukey.Statistic);
         Assert.Equal(denseTukey.P, tukey.P, 1e-9);
         var (settings, _) = SettingGroups.Of(partition, blocks);

@@ -65,12 +65,7 @@ internal static class ModelChecks
                 : "No setting is replicated: within-cell variance cannot be estimated, so every check here rests on the declared model.");
         }
 
-        var leverageOne = 0;
-        foreach (var h in residuals.Diagnostics!.Leverage)
-        {
-            leverageOne += h >= 1 - 1e-10 ? 1 : 0;
-        }
-
+        var leverageOne = residuals.Diagnostics!.LeverageOneRows.AtLeastOne;
         if (leverageOne > 0)
         {
             notes.Add(leverageOne.ToString(System.Globalization.CultureInfo.InvariantCulture)

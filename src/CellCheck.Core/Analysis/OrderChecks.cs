@@ -24,7 +24,8 @@ internal static class OrderChecks
         }
 
         var notes = new List<string>();
-        var (use, rows, missing) = RunSequence.UsedRows(order, partition, residuals.Diagnostics!.Leverage);
+        var diagnostics = residuals.Diagnostics!;
+        var (use, rows, missing) = RunSequence.UsedRows(order, partition, diagnostics.LeverageOneRows.NotBelowOne == 0 ? null : diagnostics.Leverage);
         if (missing > 0)
         {
             notes.Add(NumberText.Count(missing) + " row(s) have no run position and are left out of the order checks.");

@@ -12,15 +12,12 @@ internal static class PooledChecks
 {
     public static PooledResult Run(ResidualSet residuals, double alpha)
     {
-        var finite = 0;
-        foreach (var r in residuals.Studentized)
-        {
-            finite += double.IsFinite(r) ? 1 : 0;
-        }
-
-        var values = new double[finite];
+        // the finite values, packed to the front of a fresh array of the studentized residuals (or of a copy, when
+        // they are kept for per-row output), then sorted there
+        var source = residuals.StudentizedOnce(out var owned);
+        var values = owned ? source : new double[Finite(source)];
         var k = 0;
-        foreach (var r in residuals.Studentized)
+        foreach (var r in source)
         {
             if (double.IsFinite(r))
             {
@@ -29,8 +26,8 @@ internal static class PooledChecks
         }
 
         var notes = new List<string>();
-        var span = values.AsSpan();
-        if (residuals.ResidualDf <= 0 || values.Length == 0)
+        var span = values.AsSpan(0, k);
+        if (residuals.ResidualDf <= 0 || span.Length == 0)
         {
             notes.Add("No residual degrees of freedom: every cell holds a single value, so residuals cannot be judged.");
             var reason = NotTestableReason.NoResidualDegreesOfFreedom;
@@ -39,9 +36,9 @@ internal static class PooledChecks
                  CheckResults.NotTestable(CheckNames.DagostinoPearson, reason)], notes);
         }
 
-        if (values.Length > PrimaryRules.ShapiroWilkLimit)
+        if (span.Length > PrimaryRules.ShapiroWilkLimit)
         {
-            notes.Add($"Shapiro-Wilk's p approximation holds up to {PrimaryRules.ShapiroWilkLimit} values; with {values.Length} the W statistic is shown without p. "
+            notes.Add($"Shapiro-Wilk's p approximation holds up to {PrimaryRules.ShapiroWilkLimit} values; with {span.Length} the W statistic is shown without p. "
                 + "Judge by Anderson-Darling, D'Agostino-Pearson and the size of skewness and kurtosis.");
         }
 
@@ -55,6 +52,17 @@ internal static class PooledChecks
             CheckResults.From(CheckNames.AndersonDarling, AndersonDarling.TestSortedInPlace(span), alpha), // last: it overwrites the copy
             CheckResults.From(CheckNames.DagostinoPearson, dagostino, alpha),
         ];
-        return new PooledResult(residuals.Model, values.Length, residuals.ResidualDf, residuals.ResidualSd, moments.Skewness, moments.ExcessKurtosis, checks, notes);
+        return new PooledResult(residuals.Model, span.Length, residuals.ResidualDf, residuals.ResidualSd, moments.Skewness, moments.ExcessKurtosis, checks, notes);
+    }
+
+    private static int Finite(double[] values)
+    {
+        var finite = 0;
+        foreach (var r in values)
+        {
+            finite += double.IsFinite(r) ? 1 : 0;
+        }
+
+        return finite;
     }
 }

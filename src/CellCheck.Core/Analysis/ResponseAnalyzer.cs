@@ -89,7 +89,7 @@ public static class ResponseAnalyzer
 
                 return fitted;
             },
-            r.Residuals, r.Studentized, () => d.StudentizedExternal, d.Leverage, () => d.CooksDistance,
+            r.Residuals, () => r.Studentized, () => d.StudentizedExternal, () => d.Leverage, () => d.CooksDistance,
             () => data.RunOrder is { } ro ? Gather(order, ro) : null,
             () => data.Blocks.Select(b => Gather(order, b.Codes)).ToArray())
         {

@@ -11,7 +11,8 @@ namespace CellCheck.Core.Analysis;
 /// </summary>
 internal static class RunSequence
 {
-    public static (int[] Use, int[] Rows, int Missing) UsedRows(double[] order, CellPartition partition, double[] leverage)
+    /// <param name="leverage">Leverage of each row in grouped order; null when no row has leverage one.</param>
+    public static (int[] Use, int[] Rows, int Missing) UsedRows(double[] order, CellPartition partition, double[]? leverage)
     {
         var rows = order.Length;
         var grouped = new int[rows];
@@ -42,7 +43,7 @@ internal static class RunSequence
                 continue;
             }
 
-            if (!(leverage[i] < 1 - 1e-10))
+            if (leverage is not null && !(leverage[i] < 1 - 1e-10))
             {
                 grouped[r] = -1;
                 continue;

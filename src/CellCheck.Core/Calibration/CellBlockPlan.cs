@@ -6,23 +6,23 @@ namespace CellCheck.Core.Calibration;
 /// from the reduced normal equations, studentized by the leverages of the fit.</summary>
 internal sealed class CellBlockPlan : INullPlan
 {
-    private const double LeverageOne = 1e-10;
+    /// <summary>A row whose 1 − h is not above this has leverage one: it has no studentized residual.</summary>
+    public const double LeverageOne = 1e-10;
     private readonly CellBlockFit _fit;
     private readonly Lazy<double[]> _scale;
     private readonly int _df;
 
-    public CellBlockPlan(CellBlockFit fit, int[] cellStarts, double[] leverage, IReadOnlyList<int[]> blockCodes)
+    /// <param name="leverage">Forms the leverage of each row (called only when a simulation asks for residuals).</param>
+    /// <param name="usableResiduals">The rows whose 1 − h is above <see cref="LeverageOne"/>.</param>
+    public CellBlockPlan(CellBlockFit fit, int[] cellStarts, Func<double[]> leverage, int usableResiduals, IReadOnlyList<int[]> blockCodes)
     {
         _fit = fit;
         CellStarts = cellStarts;
-        Rows = leverage.Length;
-        foreach (var h in leverage)
-        {
-            UsableResiduals += 1.0 - h > LeverageOne ? 1 : 0;
-        }
+        Rows = cellStarts[^1];
+        UsableResiduals = usableResiduals;
 
         // √(1 − h) per row, built only when a simulation asks for residuals (never above the Monte Carlo size limit)
-        _scale = new Lazy<double[]>(() => Array.ConvertAll(leverage, h => 1.0 - h > LeverageOne ? Math.Sqrt(1.0 - h) : double.NaN));
+        _scale = new Lazy<double[]>(() => Array.ConvertAll(leverage(), h => 1.0 - h > LeverageOne ? Math.Sqrt(1.0 - h) : double.NaN));
 
         _df = Rows - fit.Rank;
         Shape = new DesignShape(Enumerable.Range(0, cellStarts.Length - 1).Select(c => cellStarts[c + 1] - cellStarts[c]));

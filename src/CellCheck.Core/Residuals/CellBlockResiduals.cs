@@ -32,30 +32,35 @@ public sealed class CellBlockResiduals(IReadOnlyList<FactorColumn> blocks, Model
         var n = y.Length;
         var residuals = new double[n];
         fit.Residualize(y, residuals);
-        var leverage = new double[n];
         var cellRss = new double[partition.CellCount];
-        // cells in parallel, each into its own slots; the sum of squares is then added in cell order (deterministic)
+        var cellCounts = new (int NotBelowOne, int AtLeastOne, int Usable)[partition.CellCount];
+        // cells in parallel, each into its own slots; sums and counts then added in cell order (deterministic)
         Parallel.For(0, partition.CellCount, c =>
         {
             var sum = 0.0;
+            var counts = (NotBelowOne: 0, AtLeastOne: 0, Usable: 0);
             for (var i = partition.Values.Starts[c]; i < partition.Values.Starts[c + 1]; i++)
             {
-                leverage[i] = fit.Leverage(c, i);
+                var h = fit.Leverage(c, i);
+                counts.NotBelowOne += h < 1 - 1e-10 ? 0 : 1;
+                counts.AtLeastOne += h >= 1 - 1e-10 ? 1 : 0;
+                counts.Usable += 1.0 - h > CellBlockPlan.LeverageOne ? 1 : 0;
                 sum += residuals[i] * residuals[i];
             }
 
-            cellRss[c] = sum;
+            (cellRss[c], cellCounts[c]) = (sum, counts);
         });
         var rss = 0.0;
-        foreach (var part in cellRss)
+        var (notBelowOne, atLeastOne, usable) = (0, 0, 0);
+        for (var c = 0; c < cellRss.Length; c++)
         {
-            rss += part;
+            rss += cellRss[c];
+            (notBelowOne, atLeastOne, usable) = (notBelowOne + cellCounts[c].NotBelowOne, atLeastOne + cellCounts[c].AtLeastOne, usable + cellCounts[c].Usable);
         }
 
         var df = n - fit.Rank;
-        var studentized = new double[n];
-        CaseDiagnostics.ComputeInParallel(residuals, leverage, rss, df, fit.Rank, studentized, null, null);
-        // fitted values, externally studentized residuals and Cook's distances on first use: only per-row output keeps them
+        // every per-row value on first use (only per-row output keeps them): at ten million rows, 400 MB not held
+        var cases = new CellBlockCases(fit, partition.Values.Starts, residuals, rss, df);
         double[] Fitted()
         {
             var fitted = new double[n];
@@ -67,27 +72,17 @@ public sealed class CellBlockResiduals(IReadOnlyList<FactorColumn> blocks, Model
             return fitted;
         }
 
-        double[] External()
-        {
-            var external = new double[n];
-            CaseDiagnostics.ComputeInParallel(residuals, leverage, rss, df, fit.Rank, null, external, null);
-            return external;
-        }
-
-        double[] Cooks()
-        {
-            var cooks = new double[n];
-            CaseDiagnostics.Compute(residuals, leverage, rss, df, fit.Rank, [], [], cooks);
-            return cooks;
-        }
-
         var s = df > 0 ? Math.Sqrt(rss / df) : double.NaN;
         var terms = spec.Terms.Select(t => t.Name(partition.Factors)).Concat(blocks.Select(b => b.Name)).ToArray();
         var info = new ModelInfo(name, terms, fit.Rank, fit.Rank, df, [], []) { Absorbed = true };
-        var plan = new CellBlockPlan(fit, partition.Values.Starts, leverage, codes);
-        return new ResidualSet(name, residuals, Fitted, studentized, s, df, plan)
+        var plan = new CellBlockPlan(fit, partition.Values.Starts, cases.Leverage, usable, codes);
+        return new ResidualSet(name, residuals, Fitted, cases.Studentized, s, df, plan)
         {
-            Diagnostics = new ResidualDiagnostics(leverage, External, Cooks, info) { Absorbed = fit },
+            Diagnostics = new ResidualDiagnostics(cases.Leverage, cases.StudentizedExternal, cases.CooksDistance, info)
+            {
+                Absorbed = fit,
+                LeverageOneRows = (notBelowOne, atLeastOne),
+            },
         };
     }
 }

@@ -7,22 +7,24 @@ namespace CellCheck.Core.Residuals;
 /// residuals and Cook's distance (NaN where leverage is one), with the model description, and, for a general
 /// linear model, its design matrix and fit.
 /// </summary>
-/// <remarks>Externally studentized residuals and Cook's distances may be given as ways to compute them: they are then
+/// <remarks>Leverages, externally studentized residuals and Cook's distances may be given as ways to compute them: they are then
 /// formed on first use (only per-row output keeps them), so a large check that writes none never holds them.</remarks>
 public sealed record ResidualDiagnostics
 {
+    private readonly Lazy<double[]> leverage;
     private readonly Func<double[]> externalSource;
     private readonly Lazy<double[]> studentizedExternal;
     private readonly Lazy<double[]> cooksDistance;
 
     public ResidualDiagnostics(double[] leverage, double[] studentizedExternal, double[] cooksDistance, ModelInfo model)
-        : this(leverage, () => studentizedExternal, () => cooksDistance, model)
+        : this(() => leverage, () => studentizedExternal, () => cooksDistance, model)
     {
+        _ = StudentizedExternal; // given, so kept: a reader for one use must not get it as its own
     }
 
-    public ResidualDiagnostics(double[] leverage, Func<double[]> studentizedExternal, Func<double[]> cooksDistance, ModelInfo model)
+    public ResidualDiagnostics(Func<double[]> leverage, Func<double[]> studentizedExternal, Func<double[]> cooksDistance, ModelInfo model)
     {
-        Leverage = leverage;
+        this.leverage = new Lazy<double[]>(leverage);
         externalSource = studentizedExternal;
         this.studentizedExternal = new Lazy<double[]>(studentizedExternal);
         this.cooksDistance = new Lazy<double[]>(cooksDistance);
@@ -30,7 +32,29 @@ public sealed record ResidualDiagnostics
     }
 
     /// <summary>Leverage (hat value) of each row.</summary>
-    public double[] Leverage { get; }
+    public double[] Leverage => leverage.Value;
+
+    /// <summary>Rows whose leverage is not below 1 − 10⁻¹⁰ and rows whose leverage is at least that (the same rows
+    /// unless a leverage is NaN): given by a fit that does not hold its leverages, else counted from them.</summary>
+    internal (int NotBelowOne, int AtLeastOne) LeverageOneRows
+    {
+        get => leverageOneRows ??= Count(Leverage);
+        init => leverageOneRows = value;
+    }
+
+    private (int NotBelowOne, int AtLeastOne)? leverageOneRows;
+
+    private static (int, int) Count(double[] leverage)
+    {
+        var (notBelowOne, atLeastOne) = (0, 0);
+        foreach (var h in leverage)
+        {
+            notBelowOne += h < 1 - 1e-10 ? 0 : 1;
+            atLeastOne += h >= 1 - 1e-10 ? 1 : 0;
+        }
+
+        return (notBelowOne, atLeastOne);
+    }
 
     /// <summary>Externally studentized residual of each row (NaN where leverage is one).</summary>
     public double[] StudentizedExternal => studentizedExternal.Value;

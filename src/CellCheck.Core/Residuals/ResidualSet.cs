@@ -11,25 +11,29 @@ namespace CellCheck.Core.Residuals;
 /// so exact ties in the data stay exact (rank-based tests depend on them). <see cref="NullPlan"/> tells the
 /// calibration how to simulate this model's residuals under the null.
 /// </summary>
-/// <remarks>Fitted values may be given as a way to compute them (value minus residual): they are formed on first
+/// <remarks>Fitted values and studentized residuals may be given as ways to compute them: they are formed on first
 /// use, so a large check that writes no per-row output never holds them.</remarks>
 public sealed record ResidualSet
 {
     private readonly Lazy<double[]> fitted;
+    private readonly Func<double[]> studentizedSource;
+    private readonly Lazy<double[]> studentized;
 
     public ResidualSet(string model, double[] residuals, double[] fitted, double[] studentized, double residualSd, int residualDf,
         INullPlan nullPlan, bool withinCellShift = false)
-        : this(model, residuals, () => fitted, studentized, residualSd, residualDf, nullPlan, withinCellShift)
+        : this(model, residuals, () => fitted, () => studentized, residualSd, residualDf, nullPlan, withinCellShift)
     {
+        _ = Studentized; // given, so kept: a reader for one use must not get it as its own
     }
 
-    public ResidualSet(string model, double[] residuals, Func<double[]> fitted, double[] studentized, double residualSd, int residualDf,
+    public ResidualSet(string model, double[] residuals, Func<double[]> fitted, Func<double[]> studentized, double residualSd, int residualDf,
         INullPlan nullPlan, bool withinCellShift = false)
     {
         Model = model;
         Residuals = residuals;
         this.fitted = new Lazy<double[]>(fitted);
-        Studentized = studentized;
+        studentizedSource = studentized;
+        this.studentized = new Lazy<double[]>(studentized);
         ResidualSd = residualSd;
         ResidualDf = residualDf;
         NullPlan = nullPlan;
@@ -42,7 +46,7 @@ public sealed record ResidualSet
 
     public double[] Fitted => fitted.Value;
 
-    public double[] Studentized { get; }
+    public double[] Studentized => studentized.Value;
 
     public double ResidualSd { get; }
 
@@ -51,6 +55,14 @@ public sealed record ResidualSet
     public INullPlan NullPlan { get; }
 
     public bool WithinCellShift { get; }
+
+    /// <summary>The studentized residuals for one reading: those kept if already formed (<paramref name="owned"/>
+    /// false: do not write to them), else a fresh array that is not kept and the caller may overwrite.</summary>
+    internal double[] StudentizedOnce(out bool owned)
+    {
+        owned = !studentized.IsValueCreated;
+        return owned ? studentizedSource() : studentized.Value;
+    }
 
     /// <summary>Leverage, external studentized residuals, Cook's distance and the model description.</summary>
     public ResidualDiagnostics? Diagnostics { get; init; }

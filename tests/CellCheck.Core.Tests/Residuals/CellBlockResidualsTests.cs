@@ -81,6 +81,20 @@ public sealed class CellBlockResidualsTests
     }
 
     [Fact]
+    public void Studentized_residuals_given_as_an_array_are_never_handed_out_as_a_readers_own()
+    {
+        var (partition, blocks, spec, _) = Design(5, 1);
+        var given = new ModelResiduals(blocks, spec, "m").Compute(partition);
+        Assert.Same(given.Studentized, given.StudentizedOnce(out var owned));
+        Assert.False(owned);
+        var formed = new CellBlockResiduals(blocks, spec, "m", new ModelResiduals(blocks, spec, "m")).Compute(partition);
+        var once = formed.StudentizedOnce(out owned);
+        Assert.True(owned);
+        Assert.Equal(once, formed.Studentized);
+        Assert.NotSame(once, formed.Studentized);
+    }
+
+    [Fact]
     public void Tukeys_test_and_lack_of_fit_equal_the_dense_fit()
     {
         var (partition, blocks, spec, _) = Design(3, 1);

@@ -8,6 +8,7 @@ namespace CellCheck.Benchmarks;
 /// <c>generate ROWS CELLS DIR</c> writes the seeded screen data and its design;
 /// <c>floor FILE</c> times a bare Sep pass over a file (the parse floor);
 /// <c>read DESIGN</c> times the encoding scan and the read on one thread and in two ranges;
+/// <c>pooled ROWS</c> times the pooled normality kernels;
 /// <c>dw ROWS CELLS</c> times the Durbin-Watson moment kernels;
 /// <c>kernels [BenchmarkDotNet arguments]</c> runs the kernel suite.
 /// </summary>
@@ -36,6 +37,9 @@ internal static class Program
             case "read" when args.Length == 2:
                 ReadTiming.Run(args[1]);
                 return 0;
+            case "pooled" when args.Length == 2:
+                PooledTiming.Run(int.Parse(args[1], CultureInfo.InvariantCulture));
+                return 0;
             case "dw" when args.Length == 3:
                 OrderTiming.Run(int.Parse(args[1], CultureInfo.InvariantCulture), int.Parse(args[2], CultureInfo.InvariantCulture));
                 return 0;
@@ -43,7 +47,7 @@ internal static class Program
                 BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args[1..]);
                 return 0;
             default:
-                Console.Error.WriteLine("usage: generate ROWS CELLS DIR | floor FILE | phases DESIGN | read DESIGN | dw ROWS CELLS | kernels [BenchmarkDotNet arguments]");
+                Console.Error.WriteLine("usage: generate ROWS CELLS DIR | floor FILE | phases DESIGN | read DESIGN | pooled ROWS | dw ROWS CELLS | kernels [BenchmarkDotNet arguments]");
                 return 2;
         }
     }

@@ -11,6 +11,11 @@ internal static class ReadTiming
 {
     public static void Run(string designPath)
     {
+        if (Environment.GetEnvironmentVariable("WARM") is { } warm)
+        {
+            Time("warm-up", () => DataReader.Read(DesignReader.Read(warm).Value!));
+        }
+
         var file = DesignReader.Read(designPath).Value!;
         if (Environment.GetEnvironmentVariable("PRETOUCH") is not null)
         {

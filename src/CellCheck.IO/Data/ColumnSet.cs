@@ -15,20 +15,30 @@ internal sealed class ColumnSet
     private readonly IReadOnlyList<WhereCondition> _where;
 
     /// <param name="origins">Per response, the origin known from earlier rows (null entries, or no array, when none is).</param>
-    public ColumnSet(DesignFile design, ColumnMap columns, NumberSyntax numbers, ResponseOrigin?[]? origins = null)
+    /// <param name="reserve">Arrays to write the columns into, as the first or the second range of a split read (or none).</param>
+    public ColumnSet(DesignFile design, ColumnMap columns, NumberSyntax numbers, ResponseOrigin?[]? origins = null,
+        (ColumnReserve Arrays, bool Second)? reserve = null)
     {
         _columns = columns;
         _missing = new MissingTokens(design.Options.Missing);
         _factorNames = [.. design.Factors.Select(f => f.Name), .. design.Blocks.Select(b => b.Name)];
         _where = design.Options.Where.Conditions;
-        Factors = Array.ConvertAll(_factorNames, name => new LevelInterner(name));
+        ColumnBuffer<T>? Space<T>(T[]? array) => reserve is { } r && array is not null ? r.Arrays.Buffer(array, r.Second) : null;
+        var space = reserve?.Arrays;
+        Factors = new LevelInterner[_factorNames.Length];
+        for (var f = 0; f < Factors.Length; f++)
+        {
+            Factors[f] = new LevelInterner(_factorNames[f], Space(space?.Factors[f]));
+        }
+
         Responses = new ResponseBuilder[design.Responses.Count];
         for (var r = 0; r < Responses.Length; r++)
         {
-            Responses[r] = new ResponseBuilder(design.Responses[r].Name, design.Responses[r].Unit, _missing, numbers, origins?[r]);
+            Responses[r] = new ResponseBuilder(design.Responses[r].Name, design.Responses[r].Unit, _missing, numbers, origins?[r], Space(space?.Responses[r]));
         }
 
-        RunOrder = columns.RunOrder is null ? null : new RunOrderBuilder(design.RunOrder!.Column, design.DataPath, _missing, numbers);
+        RunOrder = columns.RunOrder is null ? null : new RunOrderBuilder(design.RunOrder!.Column, design.DataPath, _missing, numbers, Space(space?.RunOrder));
+        Lines = Space(space?.Lines) ?? new();
     }
 
     public LevelInterner[] Factors { get; }
@@ -38,7 +48,7 @@ internal sealed class ColumnSet
     public RunOrderBuilder? RunOrder { get; }
 
     /// <summary>The data-file line of every kept row.</summary>
-    public ColumnBuffer<int> Lines { get; } = new();
+    public ColumnBuffer<int> Lines { get; }
 
     /// <summary>Rows left out by the where filter.</summary>
     public int Filtered { get; private set; }

@@ -7,11 +7,12 @@ namespace CellCheck.IO.Data;
 /// labels allocate nothing) and every row gets a level index. At the end levels are put in natural order:
 /// numerically when every label is a number, otherwise ordinal text order.
 /// </summary>
-internal sealed class LevelInterner(string name)
+/// <param name="codes">Where the codes go (a buffer in reserved space), or null for a buffer of its own.</param>
+internal sealed class LevelInterner(string name, ColumnBuffer<int>? codes = null)
 {
     private readonly Dictionary<string, int> _index = new(StringComparer.Ordinal);
     private readonly List<string> _labels = [];
-    private readonly ColumnBuffer<int> _codes = new();
+    private readonly ColumnBuffer<int> _codes = codes ?? new();
 
     public void Add(ReadOnlySpan<char> label)
     {

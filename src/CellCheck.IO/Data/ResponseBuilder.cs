@@ -13,9 +13,11 @@ namespace CellCheck.IO.Data;
 /// </summary>
 /// <param name="origin">The origin, when it is known from rows before the first one this builder reads (the rows of a
 /// file read in two ranges); null to take the first usable value read.</param>
-internal sealed class ResponseBuilder(string name, string? unit, MissingTokens missing, NumberSyntax syntax, ResponseOrigin? origin = null)
+/// <param name="values">Where the values go (a buffer in reserved space), or null for a buffer of its own.</param>
+internal sealed class ResponseBuilder(string name, string? unit, MissingTokens missing, NumberSyntax syntax, ResponseOrigin? origin = null,
+    ColumnBuffer<double>? values = null)
 {
-    private readonly ColumnBuffer<double> _values = new();
+    private readonly ColumnBuffer<double> _values = values ?? new();
     private readonly List<ExcludedRow> _excluded = [];
     private decimal? _origin = origin?.Value;
     private (long Mantissa, int Scale)? _plainOrigin = origin?.Plain;

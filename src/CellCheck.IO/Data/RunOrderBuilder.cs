@@ -8,9 +8,10 @@ namespace CellCheck.IO.Data;
 /// seconds). Missing values become NaN (those rows are left out of the order checks, and the report says so);
 /// text that is neither is a located problem.
 /// </summary>
-internal sealed class RunOrderBuilder(string column, string path, MissingTokens missing, NumberSyntax syntax)
+/// <param name="values">Where the values go (a buffer in reserved space), or null for a buffer of its own.</param>
+internal sealed class RunOrderBuilder(string column, string path, MissingTokens missing, NumberSyntax syntax, ColumnBuffer<double>? values = null)
 {
-    private readonly ColumnBuffer<double> _values = new();
+    private readonly ColumnBuffer<double> _values = values ?? new();
 
     public Problem? Problem { get; private set; }
 

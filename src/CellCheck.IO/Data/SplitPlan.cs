@@ -8,8 +8,13 @@ namespace CellCheck.IO.Data;
 /// <param name="Header">The file's first line (the header) and a line feed, to put before the second range.</param>
 /// <param name="Start">The byte offset where the second range starts.</param>
 /// <param name="FirstLine">The file line the second range starts on.</param>
-internal sealed record SplitPlan(byte[] Header, long Start, int FirstLine)
+/// <param name="SecondLines">The lines of the second range (a last line without a break counted): with the first
+/// range's <c>FirstLine − 2</c> data lines, at least as many as the rows either range can hold.</param>
+internal sealed record SplitPlan(byte[] Header, long Start, int FirstLine, long SecondLines)
 {
+    /// <summary>Data lines of the first range (every line after the header and before <see cref="FirstLine"/>).</summary>
+    public int FirstLines => FirstLine - 2;
+
     private const int ChunkBytes = 1 << 20;
 
     /// <summary>The cut of the file at <paramref name="path"/>, or null when it is not above <paramref name="minimumBytes"/>
@@ -27,7 +32,10 @@ internal sealed record SplitPlan(byte[] Header, long Start, int FirstLine)
         byte[]? header = null;
         var start = -1L;
         var breaks = 0L;
+        var secondBreaks = 0L;
         var endsWithCr = false;
+        var secondEndsWithCr = false;
+        var last = (byte)0;
         for (long at = 0; at < length;)
         {
             var read = stream.ReadAtLeast(buffer, buffer.Length, throwOnEndOfStream: false);
@@ -51,10 +59,13 @@ internal sealed record SplitPlan(byte[] Header, long Start, int FirstLine)
 
             var counted = start < 0 ? read : (int)Math.Clamp(start - at, 0, read);
             breaks += LineBreaks.Count(chunk[..counted], ref endsWithCr);
+            secondBreaks += start < 0 ? 0 : LineBreaks.Count(chunk[counted..], ref secondEndsWithCr);
+            last = chunk[^1];
             at += read;
         }
 
-        return start > 0 && start < length && breaks < int.MaxValue ? new SplitPlan(header!, start, (int)breaks + 1) : null;
+        var secondLines = secondBreaks + (last is (byte)'\n' or (byte)'\r' ? 0 : 1);
+        return start > 0 && start < length && breaks < int.MaxValue ? new SplitPlan(header!, start, (int)breaks + 1, secondLines) : null;
     }
 
     /// <summary>The header line ended by a line feed (whatever break it has in the file: a lone CR would join a line feed

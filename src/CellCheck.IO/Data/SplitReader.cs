@@ -22,8 +22,9 @@ internal static class SplitReader
 
         var origins = new TaskCompletionSource<ResponseOrigin?[]>(TaskCreationOptions.RunContinuationsAsynchronously);
         using var stop = new CancellationTokenSource();
-        var second = Task.Run(() => ReadSecond(design, columns, first.Numbers, plan, origins.Task, stop.Token));
-        var head = new ColumnSet(design, columns, first.Numbers);
+        var reserve = ColumnReserve.For(columns, plan, design.Options.Where.Conditions.Count > 0);
+        var second = Task.Run(() => ReadSecond(design, columns, first.Numbers, plan, origins.Task, reserve, stop.Token));
+        var head = new ColumnSet(design, columns, first.Numbers, reserve: reserve is null ? null : (reserve, false));
         var whole = false;
         try
         {
@@ -66,13 +67,13 @@ internal static class SplitReader
 
     /// <summary>The second range's columns, or the first problem met in it.</summary>
     private static (ColumnSet? Columns, Problem? Problem) ReadSecond(DesignFile design, ColumnMap columns, NumberSyntax numbers, SplitPlan plan,
-        Task<ResponseOrigin?[]> origins, CancellationToken stop)
+        Task<ResponseOrigin?[]> origins, ColumnReserve? reserve, CancellationToken stop)
     {
         CsvRows? rows = null;
         try
         {
             rows = new CsvRows(design.DataPath, new RangeStream(design.DataPath, plan.Header, plan.Start), design.Options.Delimiter, numbers, plan.FirstLine);
-            var set = new ColumnSet(design, columns, numbers, origins.GetAwaiter().GetResult());
+            var set = new ColumnSet(design, columns, numbers, origins.GetAwaiter().GetResult(), reserve is null ? null : (reserve, true));
             while (!stop.IsCancellationRequested && rows.Next())
             {
                 set.Take(rows);

@@ -42,4 +42,56 @@ public sealed class ColumnBufferTests
         Assert.Equal(0, next.Count);
         Assert.Equal(Enumerable.Range(0, 200_001), first.Detach());
     }
+
+    [Fact]
+    public void Two_buffers_in_one_reserved_array_join_into_that_array_when_they_fill_it()
+    {
+        var array = new int[10];
+        var (first, second) = (new ColumnBuffer<int>(array, 0, 4), new ColumnBuffer<int>(array, 4, 6));
+        for (var i = 0; i < 4; i++)
+        {
+            first.Add(i);
+        }
+
+        for (var i = 4; i < 10; i++)
+        {
+            second.Add(i);
+        }
+
+        first.Append(second);
+        var values = first.Detach();
+        Assert.Same(array, values);
+        Assert.Equal(Enumerable.Range(0, 10), values);
+    }
+
+    [Fact]
+    public void A_first_range_shorter_than_its_room_is_followed_directly_by_the_second_and_the_column_is_trimmed()
+    {
+        var array = new int[10];
+        var (first, second) = (new ColumnBuffer<int>(array, 0, 5), new ColumnBuffer<int>(array, 5, 5));
+        first.Add(0);
+        first.Add(1);
+        second.Add(2);
+        second.Add(3);
+        second.Last = 30;
+        first.Append(second);
+        first.Add(4); // past the joined values: a chunk of its own
+        var values = first.Detach();
+        Assert.NotSame(array, values);
+        Assert.Equal([0, 1, 2, 30, 4], values);
+    }
+
+    [Fact]
+    public void A_buffer_that_outgrows_its_reserved_room_goes_on_in_chunks()
+    {
+        var array = new int[3];
+        var buffer = new ColumnBuffer<int>(array, 1, 2);
+        for (var i = 0; i < 100_000; i++)
+        {
+            buffer.Add(i);
+        }
+
+        Assert.Equal(Enumerable.Range(0, 100_000), buffer.Detach());
+        Assert.Equal([0, 0, 1], array);
+    }
 }

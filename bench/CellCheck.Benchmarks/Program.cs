@@ -7,7 +7,7 @@ namespace CellCheck.Benchmarks;
 /// Benchmark entry point.
 /// <c>generate ROWS CELLS DIR</c> writes the seeded screen data and its design;
 /// <c>floor FILE</c> times a bare Sep pass over a file (the parse floor);
-/// <c>read DESIGN</c> times the encoding scan and the read on one thread and in two ranges;
+/// <c>read DESIGN [WARMUP]</c> times the encoding scan and the read on one thread and in two ranges;
 /// <c>pooled ROWS</c> times the pooled normality kernels;
 /// <c>dw ROWS CELLS</c> times the Durbin-Watson moment kernels;
 /// <c>kernels [BenchmarkDotNet arguments]</c> runs the kernel suite.
@@ -34,8 +34,8 @@ internal static class Program
             case "phases" when args.Length == 2:
                 Phases.Run(args[1]);
                 return 0;
-            case "read" when args.Length == 2:
-                ReadTiming.Run(args[1]);
+            case "read" when args.Length is 2 or 3:
+                ReadTiming.Run(args[1], args.Length == 3 ? args[2] : null);
                 return 0;
             case "pooled" when args.Length == 2:
                 PooledTiming.Run(int.Parse(args[1], CultureInfo.InvariantCulture));
@@ -47,7 +47,7 @@ internal static class Program
                 BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args[1..]);
                 return 0;
             default:
-                Console.Error.WriteLine("usage: generate ROWS CELLS DIR | floor FILE | phases DESIGN | read DESIGN | pooled ROWS | dw ROWS CELLS | kernels [BenchmarkDotNet arguments]");
+                Console.Error.WriteLine("usage: generate ROWS CELLS DIR | floor FILE | phases DESIGN | read DESIGN [WARMUP] | pooled ROWS | dw ROWS CELLS | kernels [BenchmarkDotNet arguments]");
                 return 2;
         }
     }

@@ -35,61 +35,14 @@ internal static class CellIndexer
             throw new NotSupportedException("The factorial space exceeds 2^63 combinations.");
         }
 
-        var keys = new long[values.Length];
-        for (var row = 0; row < values.Length; row++)
+        var codes = new int[factors.Count][];
+        for (var f = 0; f < codes.Length; f++)
         {
-            keys[row] = -1;
-            if (double.IsNaN(values[row]))
-            {
-                continue;
-            }
-
-            long key = 0;
-            var usable = true;
-            for (var f = 0; f < factors.Count; f++)
-            {
-                var code = factors[f].Codes[row];
-                if (code < 0)
-                {
-                    usable = false;
-                    break;
-                }
-
-                key += code * radix[f];
-            }
-
-            if (usable)
-            {
-                keys[row] = key;
-            }
+            codes[f] = factors[f].Codes;
         }
 
-        var distinct = space <= DirectTableLimit ? DistinctByTable(keys, space) : DistinctBySort(keys);
+        var distinct = space <= DirectTableLimit ? AssignByTable(codes, radix, values, cellOfRow, (int)space) : AssignBySort(codes, radix, values, cellOfRow);
         cellCount = distinct.Length;
-        var lookup = new Dictionary<long, int>(space <= DirectTableLimit ? 0 : distinct.Length);
-        int[]? table = null;
-        if (space <= DirectTableLimit)
-        {
-            table = new int[space];
-            for (var c = 0; c < distinct.Length; c++)
-            {
-                table[distinct[c]] = c;
-            }
-        }
-        else
-        {
-            for (var c = 0; c < distinct.Length; c++)
-            {
-                lookup[distinct[c]] = c;
-            }
-        }
-
-        for (var row = 0; row < keys.Length; row++)
-        {
-            var key = keys[row];
-            cellOfRow[row] = key < 0 ? -1 : table is not null ? table[key] : lookup[key];
-        }
-
         var cellLevels = new int[distinct.Length * factors.Count];
         for (var c = 0; c < distinct.Length; c++)
         {
@@ -104,45 +57,90 @@ internal static class CellIndexer
         return cellLevels;
     }
 
-    private static long[] DistinctByTable(long[] keys, long space)
+    /// <summary>The mixed-radix key of a row's cell, or −1 when its value is missing or a factor level is.</summary>
+    private static long Key(int[][] codes, long[] radix, double[] values, int row)
     {
-        var seen = new bool[space];
-        var count = 0;
-        foreach (var k in keys)
+        if (double.IsNaN(values[row]))
         {
-            if (k >= 0 && !seen[k])
-            {
-                seen[k] = true;
-                count++;
-            }
+            return -1;
         }
 
-        var result = new long[count];
-        var at = 0;
-        for (long k = 0; k < space; k++)
+        long key = 0;
+        for (var f = 0; f < codes.Length; f++)
         {
-            if (seen[k])
+            var code = codes[f][row];
+            if (code < 0)
             {
-                result[at++] = k;
+                return -1;
             }
+
+            key += code * radix[f];
         }
 
-        return result;
+        return key;
     }
 
-    private static long[] DistinctBySort(long[] keys)
+    /// <summary>A factorial space small enough for a table: the keys are written where the cell indices go, marked as
+    /// seen, then replaced by their rank among the seen keys.</summary>
+    private static long[] AssignByTable(int[][] codes, long[] radix, double[] values, int[] cellOfRow, int space)
     {
-        var set = new HashSet<long>();
-        foreach (var k in keys)
+        var table = new int[space]; // 1 where a key is seen, then the key's cell index
+        for (var row = 0; row < values.Length; row++)
         {
-            if (k >= 0)
+            var key = (int)Key(codes, radix, values, row);
+            cellOfRow[row] = key;
+            if (key >= 0)
             {
-                set.Add(k);
+                table[key] = 1;
             }
         }
 
-        var result = set.ToArray();
-        Array.Sort(result);
-        return result;
+        var distinct = new List<long>();
+        for (var k = 0; k < space; k++)
+        {
+            if (table[k] != 0)
+            {
+                table[k] = distinct.Count;
+                distinct.Add(k);
+            }
+        }
+
+        for (var row = 0; row < cellOfRow.Length; row++)
+        {
+            var key = cellOfRow[row];
+            cellOfRow[row] = key < 0 ? -1 : table[key];
+        }
+
+        return [.. distinct];
+    }
+
+    /// <summary>A factorial space too large for a table: the distinct keys are sorted and looked up by hash.</summary>
+    private static long[] AssignBySort(int[][] codes, long[] radix, double[] values, int[] cellOfRow)
+    {
+        var keys = new long[values.Length];
+        var set = new HashSet<long>();
+        for (var row = 0; row < values.Length; row++)
+        {
+            keys[row] = Key(codes, radix, values, row);
+            if (keys[row] >= 0)
+            {
+                set.Add(keys[row]);
+            }
+        }
+
+        var distinct = set.ToArray();
+        Array.Sort(distinct);
+        var lookup = new Dictionary<long, int>(distinct.Length);
+        for (var c = 0; c < distinct.Length; c++)
+        {
+            lookup[distinct[c]] = c;
+        }
+
+        for (var row = 0; row < keys.Length; row++)
+        {
+            cellOfRow[row] = keys[row] < 0 ? -1 : lookup[keys[row]];
+        }
+
+        return distinct;
     }
 }

@@ -89,18 +89,31 @@ internal static class RadixSort
     /// sorted value back with <see cref="ValueOf"/>. Allocates only the two buffers of the passes and the order.</summary>
     public static ulong[] SortedKeys(ReadOnlySpan<double> values, out int[] order)
     {
-        var n = values.Length;
-        var keys = new ulong[n];
+        var keys = new ulong[values.Length];
+        for (var i = 0; i < keys.Length; i++)
+        {
+            keys[i] = Key(values[i]);
+        }
+
+        return SortKeys(keys, out order, out _);
+    }
+
+    /// <summary>As <see cref="SortedKeys(ReadOnlySpan{double}, out int[])"/> on keys already made by <see cref="KeyOf"/>:
+    /// <paramref name="keys"/> serves as one of the two buffers of the passes, and <paramref name="free"/> is the other
+    /// (null below the threshold), no longer needed once the sort returns.</summary>
+    public static ulong[] SortKeys(ulong[] keys, out int[] order, out ulong[]? free)
+    {
+        var n = keys.Length;
         order = new int[n];
         for (var i = 0; i < n; i++)
         {
-            keys[i] = Key(values[i]);
             order[i] = i;
         }
 
         if (n < Threshold)
         {
             Array.Sort(keys, order);
+            free = null;
             return keys;
         }
 
@@ -109,11 +122,16 @@ internal static class RadixSort
         if (Passes(keys, spare, order, carried, n))
         {
             order = carried;
+            free = keys;
             return spare;
         }
 
+        free = spare;
         return keys;
     }
+
+    /// <summary>The order-preserving key of a value (−0 sorts with +0).</summary>
+    public static ulong KeyOf(double value) => Key(value);
 
     /// <summary>The value of a key made by this sort.</summary>
     public static double ValueOf(ulong key) => Value(key);

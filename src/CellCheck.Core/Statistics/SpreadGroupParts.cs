@@ -20,8 +20,10 @@ internal sealed class SpreadGroupParts
         var has = (SpreadTests t) => (tests & t) != 0;
         Levene = has(SpreadTests.Levene) ? new GroupAnovaParts(groups) : null;
         LeveneCentres = has(SpreadTests.Levene) ? new double[groups] : null;
+        LeveneFloors = has(SpreadTests.Levene) ? new double[groups] : null;
         BrownForsythe = has(SpreadTests.BrownForsythe) ? new GroupAnovaParts(groups) : null;
         BrownForsytheCentres = has(SpreadTests.BrownForsythe) ? new double[groups] : null;
+        BrownForsytheFloors = has(SpreadTests.BrownForsythe) ? new double[groups] : null;
         ZerosRemoved = has(SpreadTests.BrownForsytheZerosRemoved) ? new GroupAnovaParts(groups) : null;
         SumsOfSquares = has(SpreadTests.Bartlett) ? new double[groups] : null;
         Medians = has(SpreadTests.FlignerKilleen) ? new double[groups] : null;
@@ -33,11 +35,17 @@ internal sealed class SpreadGroupParts
     /// <summary>Levene: |y₀ + centre| of each group, for the rounding floor.</summary>
     public double[]? LeveneCentres { get; }
 
+    /// <summary>Levene: each group's part of the rounding floor (see <see cref="SpreadKernel.Noise"/>).</summary>
+    public double[]? LeveneFloors { get; }
+
     /// <summary>Brown-Forsythe: the absolute deviations from the group medians, by group.</summary>
     public GroupAnovaParts? BrownForsythe { get; }
 
     /// <summary>Brown-Forsythe: |y₀ + centre| of each group, for the rounding floor.</summary>
     public double[]? BrownForsytheCentres { get; }
+
+    /// <summary>Brown-Forsythe: each group's part of the rounding floor (see <see cref="SpreadKernel.Noise"/>).</summary>
+    public double[]? BrownForsytheFloors { get; }
 
     /// <summary>Brown-Forsythe with zeros removed: the kept deviations, by group.</summary>
     public GroupAnovaParts? ZerosRemoved { get; }
@@ -111,9 +119,9 @@ internal sealed class SpreadGroupParts
             {
                 // the mean of y − y₀ (whose first value is 0): 0 + Σ (y − y₀) / n
                 var c = 0.0 + (sum / n);
-                AbsoluteDeviations(y, y0, c, deviations);
-                Levene.Set(g, deviations);
                 LeveneCentres![g] = Math.Abs(y0 + c);
+                LeveneFloors![g] = AbsoluteDeviations(y, y0, c, LeveneCentres[g], deviations);
+                Levene.Set(g, deviations);
             }
         }
 
@@ -126,9 +134,9 @@ internal sealed class SpreadGroupParts
             {
                 // the median of y − y₀ (up to the sign of a zero, which no absolute deviation sees)
                 var c = odd ? upper - y0 : 0.5 * ((lower - y0) + (upper - y0));
-                AbsoluteDeviations(y, y0, c, deviations);
-                BrownForsythe.Set(g, deviations);
                 BrownForsytheCentres![g] = Math.Abs(y0 + c);
+                BrownForsytheFloors![g] = AbsoluteDeviations(y, y0, c, BrownForsytheCentres[g], deviations);
+                BrownForsythe.Set(g, deviations);
             }
 
             if (ZerosRemoved is not null)
@@ -156,12 +164,17 @@ internal sealed class SpreadGroupParts
         return magnitude;
     }
 
-    /// <summary>|(y − y₀) − c| for each value.</summary>
-    private static void AbsoluteDeviations(ReadOnlySpan<double> y, double y0, double c, Span<double> deviations)
+    /// <summary>|(y − y₀) − c| for each value; returns the group's part of the rounding floor, Σ noise² in order.</summary>
+    private static double AbsoluteDeviations(ReadOnlySpan<double> y, double y0, double c, double centre, Span<double> deviations)
     {
+        var floor = 0.0;
         for (var i = 0; i < y.Length; i++)
         {
             deviations[i] = Math.Abs((y[i] - y0) - c);
+            var noise = SpreadKernel.Noise(y[i], centre);
+            floor += noise * noise;
         }
+
+        return floor;
     }
 }

@@ -1,3 +1,5 @@
+using System.Runtime.CompilerServices;
+
 namespace CellCheck.Core.Statistics;
 
 /// <summary>
@@ -15,6 +17,9 @@ internal static class SpreadKernel
     /// <summary>Unit round-off of double precision, 2⁻⁵³.</summary>
     private const double UnitRoundoff = 1.1102230246251565e-16;
 
+    /// <summary>2⁻²⁰: the relative margin above the groups' sum of the rounding floor that decides without the ordered sum.</summary>
+    private const double Margin = 9.5367431640625e-7;
+
     public static SpreadOutcomes Run(GroupedValues groups, SpreadTests tests)
     {
         ArgumentNullException.ThrowIfNull(groups);
@@ -23,11 +28,10 @@ internal static class SpreadKernel
         var deviationTests = SpreadTests.Levene | SpreadTests.BrownForsythe | SpreadTests.BrownForsytheZerosRemoved;
         var work = part.GroupCount < 2 ? SpreadTests.None : obstacle is null ? tests : tests & ~deviationTests;
         var parts = SpreadGroupParts.Compute(part, work);
-        var (levene, brownForsythe) = RoundingFloors(part, parts);
         var notTestable = TestOutcome.NotTestable(obstacle ?? NotTestableReason.TooFewGroups);
         return new SpreadOutcomes(
-            Asked(tests, SpreadTests.Levene, parts.Levene is { } l ? AbsoluteDeviationF(l, levene) : notTestable),
-            Asked(tests, SpreadTests.BrownForsythe, parts.BrownForsythe is { } b ? AbsoluteDeviationF(b, brownForsythe) : notTestable),
+            Asked(tests, SpreadTests.Levene, parts.Levene is { } l ? AbsoluteDeviationF(l, parts.LeveneFloors!, () => RoundingFloors(part, parts).Levene) : notTestable),
+            Asked(tests, SpreadTests.BrownForsythe, parts.BrownForsythe is { } b ? AbsoluteDeviationF(b, parts.BrownForsytheFloors!, () => RoundingFloors(part, parts).BrownForsythe) : notTestable),
             Asked(tests, SpreadTests.BrownForsytheZerosRemoved, parts.ZerosRemoved is { } z ? ZerosRemoved(z, part.GroupCount) : notTestable),
             Asked(tests, SpreadTests.Bartlett, parts.SumsOfSquares is { } ss ? Bartlett(part, ss) : TestOutcome.NotTestable(NotTestableReason.TooFewGroups)),
             Asked(tests, SpreadTests.FlignerKilleen, parts.Medians is { } m ? FlignerKilleenScores.Test(part, m, parts.Magnitude) : TestOutcome.NotTestable(NotTestableReason.TooFewGroups)));
@@ -55,9 +59,9 @@ internal static class SpreadKernel
             var (lc, bc) = (leveneCentres[g], brownForsytheCentres[g]);
             foreach (var v in part.Group(g))
             {
-                var noise = RoundingAllowance * UnitRoundoff * (Math.Abs(v) + lc);
+                var noise = Noise(v, lc);
                 levene += noise * noise;
-                noise = RoundingAllowance * UnitRoundoff * (Math.Abs(v) + bc);
+                noise = Noise(v, bc);
                 brownForsythe += noise * noise;
             }
         }
@@ -65,11 +69,30 @@ internal static class SpreadKernel
         return (levene, brownForsythe);
     }
 
-    /// <summary>Levene's or Brown-Forsythe's F from the deviations' ANOVA parts and the rounding floor.</summary>
-    private static TestOutcome AbsoluteDeviationF(GroupAnovaParts deviations, double roundingFloor)
+    /// <summary>The rounding allowance of the absolute deviation of <paramref name="y"/> from a centre c, with
+    /// <paramref name="centre"/> = |y₀ + c| (the centre on the scale of the values).</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)]
+    internal static double Noise(double y, double centre) => RoundingAllowance * UnitRoundoff * (Math.Abs(y) + centre);
+
+    /// <summary>
+    /// Levene's or Brown-Forsythe's F from the deviations' ANOVA parts, testable when the within-group sum of squares
+    /// exceeds the rounding floor summed over all values in order. The groups' parts of the floor, added in group
+    /// order, are that sum in another order: for n non-negative terms either sum is within a factor 1 ± γ of the exact
+    /// sum, γ = (n − 1)u / (1 − (n − 1)u) &lt; 2⁻²¹ for n &lt; 2³¹ (Higham 2002, Accuracy and Stability of Numerical
+    /// Algorithms, §4.2; additions of non-negative numbers do not underflow), so a sum of squares above the parts' sum by
+    /// the factor 1 + 2⁻²⁰ is above the ordered sum too. Only otherwise is the ordered sum formed (one pass over the values).
+    /// </summary>
+    private static TestOutcome AbsoluteDeviationF(GroupAnovaParts deviations, double[] groupFloors, Func<double> orderedFloor)
     {
         var table = deviations.Table();
-        if (!(table.SsWithin > roundingFloor))
+        var floor = 0.0;
+        foreach (var f in groupFloors)
+        {
+            floor += f;
+        }
+
+        var clearlyAbove = double.IsFinite(floor) && table.SsWithin > floor * (1 + Margin);
+        if (!clearlyAbove && !(table.SsWithin > orderedFloor()))
         {
             return TestOutcome.NotTestable(NotTestableReason.DegenerateWithinGroups);
         }

@@ -47,6 +47,12 @@ public sealed class SpreadKernelTests
     }
 
     [Fact]
+    public void Cells_of_equal_values_are_degenerate_as_each_test_alone_finds_them()
+    {
+        AllSame(GroupedValues.FromGroups([[1.0, 1.0, 1.0], [4.0, 4.0, 4.0, 4.0], [1e6 + 0.1, 1e6 + 0.1, 1e6 + 0.1]]));
+    }
+
+    [Fact]
     public void Values_too_large_to_square_are_rescaled_once_and_give_the_separate_results()
     {
         AllSame(GroupedValues.FromGroups([[1e300, 3e300, 2e300], [5e300, 1e300, 4e300, 4e300], [2e300, 2.5e300]]));

@@ -19,7 +19,7 @@ internal static class FlignerKilleenScores
     public static TestOutcome Test(GroupedValues part, double[] medians, double magnitude)
     {
         var n = part.Count;
-        var keys = new ulong[n];
+        var keys = GC.AllocateUninitializedArray<ulong>(n); // written in full below
         GroupChunks.ForEach(part.Starts, (first, end) =>
         {
             for (var g = first; g < end; g++)

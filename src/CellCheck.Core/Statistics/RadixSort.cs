@@ -104,7 +104,8 @@ internal static class RadixSort
     public static ulong[] SortKeys(ulong[] keys, out int[] order, out ulong[]? free)
     {
         var n = keys.Length;
-        order = new int[n];
+        // every buffer below is written in full before it is read: no need for the allocator to clear them first
+        order = GC.AllocateUninitializedArray<int>(n);
         for (var i = 0; i < n; i++)
         {
             order[i] = i;
@@ -117,8 +118,8 @@ internal static class RadixSort
             return keys;
         }
 
-        var spare = new ulong[n];
-        var carried = new int[n];
+        var spare = GC.AllocateUninitializedArray<ulong>(n);
+        var carried = GC.AllocateUninitializedArray<int>(n);
         if (Passes(keys, spare, order, carried, n))
         {
             order = carried;

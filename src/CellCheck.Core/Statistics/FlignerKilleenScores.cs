@@ -68,23 +68,33 @@ internal static class FlignerKilleenScores
         }
 
         bounds.Add(n);
-        Parallel.For(0, bounds.Count - 1, r =>
+        if (bounds.Count == 2)
         {
-            for (var start = bounds[r]; start < bounds[r + 1];)
+            ScoreRange(sorted, order, scores, tolerance, 0, n);
+            return;
+        }
+
+        Parallel.For(0, bounds.Count - 1, r => ScoreRange(sorted, order, scores, tolerance, bounds[r], bounds[r + 1]));
+    }
+
+    /// <summary>Scores the runs from <paramref name="first"/> (a run start) to <paramref name="last"/> (a run end).</summary>
+    private static void ScoreRange(ulong[] sorted, int[] order, ulong[] scores, double tolerance, int first, int last)
+    {
+        var n = sorted.Length;
+        for (var start = first; start < last;)
+        {
+            var end = RunEnd(sorted, start, tolerance);
+
+            // positions start..end-1 hold ranks start+1..end; their mean is (start + 1 + end) / 2
+            var rank = 0.5 * (start + 1 + end);
+            var score = BitConverter.DoubleToUInt64Bits(StandardNormal.Quantile((1.0 + (rank / (n + 1))) / 2.0));
+            for (var j = start; j < end; j++)
             {
-                var end = RunEnd(sorted, start, tolerance);
-
-                // positions start..end-1 hold ranks start+1..end; their mean is (start + 1 + end) / 2
-                var rank = 0.5 * (start + 1 + end);
-                var score = BitConverter.DoubleToUInt64Bits(StandardNormal.Quantile((1.0 + (rank / (n + 1))) / 2.0));
-                for (var j = start; j < end; j++)
-                {
-                    scores[order[j]] = score;
-                }
-
-                start = end;
+                scores[order[j]] = score;
             }
-        });
+
+            start = end;
+        }
     }
 
     /// <summary>The end of the run of ties that starts at <paramref name="start"/>.</summary>

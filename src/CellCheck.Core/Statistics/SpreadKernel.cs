@@ -7,7 +7,9 @@ namespace CellCheck.Core.Statistics;
 /// Fligner-Killeen; see each test's type for the method and its reference) computed together: one rescaling and one
 /// filter of the groups, one visit of each group for what the tests share (<see cref="SpreadGroupParts"/>), then each
 /// test's combination in group order. Each outcome equals the test computed alone, bit for bit: every number is formed
-/// by the same operations in the same order; only the groups' independent parts are computed side by side.
+/// by the same operations in the same order; only the groups' independent parts are computed side by side. (The one sum
+/// taken in another order, the rounding floor of Levene and Brown-Forsythe, decides only where the sum in order would
+/// decide the same: see <see cref="AbsoluteDeviationF"/>.)
 /// </summary>
 internal static class SpreadKernel
 {

@@ -10,6 +10,7 @@ namespace CellCheck.Benchmarks;
 /// <c>read DESIGN [WARMUP]</c> times the encoding scan and the read on one thread and in two ranges;
 /// <c>pooled ROWS</c> times the pooled normality kernels;
 /// <c>dw ROWS CELLS</c> times the Durbin-Watson moment kernels;
+/// <c>spread ROWS CELLS</c> times the spread tests together and each alone;
 /// <c>kernels [BenchmarkDotNet arguments]</c> runs the kernel suite.
 /// </summary>
 internal static class Program
@@ -43,11 +44,14 @@ internal static class Program
             case "dw" when args.Length == 3:
                 OrderTiming.Run(int.Parse(args[1], CultureInfo.InvariantCulture), int.Parse(args[2], CultureInfo.InvariantCulture));
                 return 0;
+            case "spread" when args.Length == 3:
+                SpreadTiming.Run(int.Parse(args[1], CultureInfo.InvariantCulture), int.Parse(args[2], CultureInfo.InvariantCulture));
+                return 0;
             case "kernels":
                 BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args[1..]);
                 return 0;
             default:
-                Console.Error.WriteLine("usage: generate ROWS CELLS DIR | floor FILE | phases DESIGN | read DESIGN [WARMUP] | pooled ROWS | dw ROWS CELLS | kernels [BenchmarkDotNet arguments]");
+                Console.Error.WriteLine("usage: generate ROWS CELLS DIR | floor FILE | phases DESIGN | read DESIGN [WARMUP] | pooled ROWS | dw ROWS CELLS | spread ROWS CELLS | kernels [BenchmarkDotNet arguments]");
                 return 2;
         }
     }

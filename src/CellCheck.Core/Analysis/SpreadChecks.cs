@@ -44,16 +44,17 @@ internal static class SpreadChecks
             notes.Add($"{singletons} cell(s) with a single value take no part in the spread tests.");
         }
 
-        // the five tests read the same values and write nothing shared: run side by side
-        var checks = new CheckResult[5];
-        // each test holds a few copies of the values: above a million rows one at a time, to bound memory
-        var rows = grouped.Count;
-        Parallel.Invoke(new ParallelOptions { MaxDegreeOfParallelism = rows > WorkingMemory.ReleaseRows ? 1 : -1 },
-            () => checks[4] = Released(CheckResults.From(CheckNames.FlignerKilleen, FlignerKilleen.Test(grouped), alpha), rows),
-            () => checks[1] = Released(CheckResults.From(CheckNames.BrownForsythe, BrownForsythe.Test(grouped), alpha), rows),
-            () => checks[2] = Released(CheckResults.From(CheckNames.BrownForsytheZerosRemoved, BrownForsytheZerosRemoved.Test(grouped), alpha), rows),
-            () => checks[0] = Released(CheckResults.From(CheckNames.Levene, Levene.Test(grouped), alpha), rows),
-            () => checks[3] = CheckResults.From(CheckNames.Bartlett, Bartlett.Test(grouped), alpha));
+        // the five tests from one visit of each cell (cells side by side), then the working copies released on large data
+        var outcomes = SpreadKernel.Run(grouped, SpreadTests.All);
+        WorkingMemory.Release(grouped.Count);
+        CheckResult[] checks =
+        [
+            CheckResults.From(CheckNames.Levene, outcomes.Levene!, alpha),
+            CheckResults.From(CheckNames.BrownForsythe, outcomes.BrownForsythe!, alpha),
+            CheckResults.From(CheckNames.BrownForsytheZerosRemoved, outcomes.BrownForsytheZerosRemoved!, alpha),
+            CheckResults.From(CheckNames.Bartlett, outcomes.Bartlett!, alpha),
+            CheckResults.From(CheckNames.FlignerKilleen, outcomes.FlignerKilleen!, alpha),
+        ];
         if (checks[0].Reason == NotTestableReason.AllGroupsOfTwo)
         {
             notes.Add("Every cell has two values: the absolute deviations from the centre are equal within each cell, "
@@ -74,12 +75,5 @@ internal static class SpreadChecks
         }
 
         return new SpreadResult(used, checks, ratio, largest, smallest, notes);
-    }
-
-    /// <summary>The result, once the test's working copies are released (one test at a time on large data).</summary>
-    private static CheckResult Released(CheckResult result, int rows)
-    {
-        WorkingMemory.Release(rows);
-        return result;
     }
 }

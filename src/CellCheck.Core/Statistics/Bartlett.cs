@@ -19,53 +19,5 @@ public static class Bartlett
 {
     /// <summary>Tests whether the groups share one variance under normality.</summary>
     /// <returns>K² (never negative: rounding below zero is clamped) with Df1 = k − 1, and its upper-tail chi-square p-value.</returns>
-    public static TestOutcome Test(GroupedValues groups)
-    {
-        ArgumentNullException.ThrowIfNull(groups);
-        groups = SampleGuard.Scaled(groups);
-        if (GroupFilter.CountAtLeast(groups, 2) < 2)
-        {
-            return TestOutcome.NotTestable(NotTestableReason.TooFewGroups);
-        }
-
-        var variances = new double[groups.GroupCount];
-        var k = 0;
-        var nu = 0;
-        var pooledSs = 0.0;
-        var reciprocalSum = 0.0;
-        for (var g = 0; g < groups.GroupCount; g++)
-        {
-            var y = groups.Group(g);
-            if (y.Length < 2)
-            {
-                continue;
-            }
-
-            var ss = Descriptive.SumOfSquares(y);
-            if (!(ss > 0))
-            {
-                return TestOutcome.NotTestable(NotTestableReason.ZeroVarianceGroup);
-            }
-
-            variances[g] = ss / (y.Length - 1);
-            pooledSs += ss;
-            reciprocalSum += 1.0 / (y.Length - 1);
-            nu += y.Length - 1;
-            k++;
-        }
-
-        var pooled = pooledSs / nu;
-        var numerator = 0.0;
-        for (var g = 0; g < groups.GroupCount; g++)
-        {
-            if (groups.Size(g) >= 2)
-            {
-                numerator += (groups.Size(g) - 1) * Math.Log(pooled / variances[g]);
-            }
-        }
-
-        var correction = 1.0 + ((reciprocalSum - (1.0 / nu)) / (3.0 * (k - 1)));
-        var statistic = Math.Max(0.0, numerator / correction);
-        return new TestOutcome(statistic, UpperTail.ChiSquare(statistic, k - 1), k - 1);
-    }
+    public static TestOutcome Test(GroupedValues groups) => SpreadKernel.Run(groups, SpreadTests.Bartlett).Bartlett!;
 }

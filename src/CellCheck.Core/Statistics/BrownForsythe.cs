@@ -17,5 +17,5 @@ public static class BrownForsythe
 {
     /// <summary>Tests whether the groups share one variance, using deviations from the group medians.</summary>
     /// <returns>F with Df1 = k − 1 and Df2 = N − k, and its upper-tail p-value.</returns>
-    public static TestOutcome Test(GroupedValues groups) => AbsoluteDeviationFTest.Test(groups, SpreadCentre.Median);
+    public static TestOutcome Test(GroupedValues groups) => SpreadKernel.Run(groups, SpreadTests.BrownForsythe).BrownForsythe!;
 }

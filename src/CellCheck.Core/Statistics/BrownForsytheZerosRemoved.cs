@@ -16,28 +16,7 @@ namespace CellCheck.Core.Statistics;
 /// </remarks>
 public static class BrownForsytheZerosRemoved
 {
-    public static TestOutcome Test(GroupedValues groups)
-    {
-        ArgumentNullException.ThrowIfNull(groups);
-        var part = GroupFilter.AtLeast(SampleGuard.Scaled(groups), 2);
-        if (GroupFilter.DeviationTestObstacle(part) is { } obstacle)
-        {
-            return TestOutcome.NotTestable(obstacle);
-        }
-
-        var deviations = new double[part.Count];
-        var starts = new int[part.GroupCount + 1];
-        var scratch = new double[GroupFilter.LargestSize(part)];
-        var statistic = Statistic(part, deviations, starts, scratch);
-        if (double.IsNaN(statistic))
-        {
-            return TestOutcome.NotTestable(NotTestableReason.DegenerateWithinGroups);
-        }
-
-        var df1 = part.GroupCount - 1;
-        var df2 = starts[^1] - part.GroupCount;
-        return new TestOutcome(statistic, UpperTail.F(statistic, df1, df2), df1, df2);
-    }
+    public static TestOutcome Test(GroupedValues groups) => SpreadKernel.Run(groups, SpreadTests.BrownForsytheZerosRemoved).BrownForsytheZerosRemoved!;
 
     /// <summary>
     /// The F statistic alone, into caller-owned buffers (deviations: N, starts: k + 1, scratch: largest group);
@@ -50,23 +29,31 @@ public static class BrownForsytheZerosRemoved
         for (var g = 0; g < part.GroupCount; g++)
         {
             var y = part.Group(g);
-            var median = Descriptive.Median(y, scratch);
-            var skipped = y.Length % 2 == 0;
-            foreach (var v in y)
-            {
-                if (!skipped && v == median)
-                {
-                    skipped = true;
-                    continue;
-                }
-
-                deviations[at++] = Math.Abs(v - median);
-            }
-
+            at += KeptDeviations(y, Descriptive.Median(y, scratch), deviations.AsSpan(at));
             starts[g + 1] = at;
         }
 
         var table = OneWayAnova.Compute(new GroupedValues(deviations[..at], starts));
         return table.SsWithin > 0 && double.IsFinite(table.F) ? table.F : double.NaN;
+    }
+
+    /// <summary>Writes the absolute deviations of a group from its median, less one zero when the size is odd, into
+    /// <paramref name="deviations"/>; returns how many.</summary>
+    internal static int KeptDeviations(ReadOnlySpan<double> y, double median, Span<double> deviations)
+    {
+        var at = 0;
+        var skipped = y.Length % 2 == 0;
+        foreach (var v in y)
+        {
+            if (!skipped && v == median)
+            {
+                skipped = true;
+                continue;
+            }
+
+            deviations[at++] = Math.Abs(v - median);
+        }
+
+        return at;
     }
 }

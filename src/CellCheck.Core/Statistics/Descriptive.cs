@@ -62,20 +62,31 @@ public static class Descriptive
             return double.NaN;
         }
 
+        var (lower, upper) = MiddleOrderStatistics(x, scratch);
+        return x.Length % 2 == 1 ? upper : 0.5 * (lower + upper);
+    }
+
+    /// <summary>
+    /// The order statistics at n/2 − 1 (<c>Lower</c>, only for even n: otherwise NaN) and n/2 (<c>Upper</c>), 0-based, of a
+    /// non-empty span, as <see cref="Median(ReadOnlySpan{double}, Span{double})"/> finds them (sort up to 64 values,
+    /// selection above). Uses <paramref name="scratch"/> (length ≥ n) and leaves it reordered.
+    /// </summary>
+    internal static (double Lower, double Upper) MiddleOrderStatistics(ReadOnlySpan<double> x, Span<double> scratch)
+    {
         var s = scratch[..x.Length];
         x.CopyTo(s);
         var mid = s.Length / 2;
         if (s.Length <= 64)
         {
             s.Sort();
-            return s.Length % 2 == 1 ? s[mid] : 0.5 * (s[mid - 1] + s[mid]);
+            return s.Length % 2 == 1 ? (double.NaN, s[mid]) : (s[mid - 1], s[mid]);
         }
 
         // selection instead of a full sort: linear time for the millions of residuals of a large design
         var upper = Selection.Select(s, mid);
         if (s.Length % 2 == 1)
         {
-            return upper;
+            return (double.NaN, upper);
         }
 
         var lower = double.NegativeInfinity;
@@ -84,7 +95,7 @@ public static class Descriptive
             lower = Math.Max(lower, v);
         }
 
-        return 0.5 * (lower + upper);
+        return (lower, upper);
     }
 
     /// <summary>Median of a span (allocates a scratch copy; use the scratch overload in hot loops).</summary>

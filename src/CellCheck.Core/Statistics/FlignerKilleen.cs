@@ -28,47 +28,5 @@ public static class FlignerKilleen
 
     /// <summary>Tests whether the groups share one spread, using normal scores of ranked absolute deviations.</summary>
     /// <returns>X² with Df1 = k − 1, and its upper-tail chi-square p-value.</returns>
-    public static TestOutcome Test(GroupedValues groups)
-    {
-        ArgumentNullException.ThrowIfNull(groups);
-        var part = GroupFilter.AtLeast(SampleGuard.Scaled(groups), 2);
-        if (part.GroupCount < 2)
-        {
-            return TestOutcome.NotTestable(NotTestableReason.TooFewGroups);
-        }
-
-        var n = part.Count;
-        var scores = new double[n];
-        var scratch = new double[GroupFilter.LargestSize(part)];
-        var magnitude = 0.0;
-        foreach (var v in part.Values)
-        {
-            magnitude = Math.Max(magnitude, Math.Abs(v));
-        }
-
-        for (var g = 0; g < part.GroupCount; g++)
-        {
-            var y = part.Group(g);
-            var median = Descriptive.Median(y, scratch);
-            var offset = part.Starts[g];
-            for (var i = 0; i < y.Length; i++)
-            {
-                scores[offset + i] = Math.Abs(y[i] - median);
-            }
-        }
-
-        // the normal scores overwrite the deviations they are ranked from
-        TieAveragedRanks.Compute(scores, scores, TieUlps * (Math.BitIncrement(magnitude) - magnitude),
-            rank => StandardNormal.Quantile((1.0 + (rank / (n + 1))) / 2.0));
-        var table = OneWayAnova.Compute(new GroupedValues(scores, part.Starts));
-        var total = table.SsBetween + table.SsWithin;
-        if (!(total > 0))
-        {
-            return TestOutcome.NotTestable(NotTestableReason.DegenerateWithinGroups);
-        }
-
-        var statistic = table.SsBetween / (total / (n - 1));
-        var df = part.GroupCount - 1;
-        return new TestOutcome(statistic, UpperTail.ChiSquare(statistic, df), df);
-    }
+    public static TestOutcome Test(GroupedValues groups) => SpreadKernel.Run(groups, SpreadTests.FlignerKilleen).FlignerKilleen!;
 }

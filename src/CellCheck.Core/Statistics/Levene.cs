@@ -19,5 +19,5 @@ public static class Levene
 {
     /// <summary>Tests whether the groups share one variance, using deviations from the group means.</summary>
     /// <returns>F with Df1 = k − 1 and Df2 = N − k, and its upper-tail p-value.</returns>
-    public static TestOutcome Test(GroupedValues groups) => AbsoluteDeviationFTest.Test(groups, SpreadCentre.Mean);
+    public static TestOutcome Test(GroupedValues groups) => SpreadKernel.Run(groups, SpreadTests.Levene).Levene!;
 }

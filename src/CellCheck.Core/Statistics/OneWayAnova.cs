@@ -20,37 +20,64 @@ public static class OneWayAnova
     public static AnovaTable Compute(GroupedValues groups)
     {
         ArgumentNullException.ThrowIfNull(groups);
+        var sizes = new int[groups.GroupCount];
+        var means = new double[groups.GroupCount];
+        var within = new double[groups.GroupCount];
+        for (var g = 0; g < groups.GroupCount; g++)
+        {
+            sizes[g] = groups.Size(g);
+            if (sizes[g] > 0)
+            {
+                (means[g], within[g]) = Summarise(groups.Group(g));
+            }
+        }
+
+        return FromSummaries(sizes, means, within);
+    }
+
+    /// <summary>One group's part of the table: its mean and its within-group sum of squares (non-empty group).</summary>
+    internal static (double Mean, double WithinSs) Summarise(ReadOnlySpan<double> y)
+    {
+        var mean = Descriptive.Mean(y);
+        return (mean, CompensatedSumOfSquares(y, mean));
+    }
+
+    /// <summary>
+    /// The table from each group's size and <see cref="Summarise"/> (empty groups: size 0, the rest ignored), the
+    /// groups' parts combined in group order: the same result as <see cref="Compute"/> on the values, bit for bit.
+    /// </summary>
+    internal static AnovaTable FromSummaries(ReadOnlySpan<int> sizes, ReadOnlySpan<double> means, ReadOnlySpan<double> within)
+    {
         var k = 0;
         var n = 0;
         var origin = double.NaN;
         var shiftedTotal = 0.0;
         var ssWithin = 0.0;
-        for (var g = 0; g < groups.GroupCount; g++)
+        for (var g = 0; g < sizes.Length; g++)
         {
-            var y = groups.Group(g);
-            if (y.IsEmpty)
+            if (sizes[g] == 0)
             {
                 continue;
             }
 
-            var mean = Descriptive.Mean(y);
+            var mean = means[g];
             if (k == 0)
             {
                 origin = mean;
             }
 
-            shiftedTotal += y.Length * (mean - origin);
-            ssWithin += CompensatedSumOfSquares(y, mean);
+            shiftedTotal += sizes[g] * (mean - origin);
+            ssWithin += within[g];
             k++;
-            n += y.Length;
+            n += sizes[g];
         }
 
         var grandMean = n == 0 ? double.NaN : origin + (shiftedTotal / n);
-        var ssBetween = BetweenSumOfSquares(groups, grandMean, n);
+        var ssBetween = BetweenSumOfSquares(sizes, means, grandMean, n);
         return Table(ssBetween, ssWithin, k - 1, n - k);
     }
 
-    private static double BetweenSumOfSquares(GroupedValues groups, double grandMean, int n)
+    private static double BetweenSumOfSquares(ReadOnlySpan<int> sizes, ReadOnlySpan<double> means, double grandMean, int n)
     {
         if (n == 0)
         {
@@ -59,17 +86,16 @@ public static class OneWayAnova
 
         var ss = 0.0;
         var comp = 0.0;
-        for (var g = 0; g < groups.GroupCount; g++)
+        for (var g = 0; g < sizes.Length; g++)
         {
-            var y = groups.Group(g);
-            if (y.IsEmpty)
+            if (sizes[g] == 0)
             {
                 continue;
             }
 
-            var d = Descriptive.Mean(y) - grandMean;
-            ss += y.Length * d * d;
-            comp += y.Length * d;
+            var d = means[g] - grandMean;
+            ss += sizes[g] * d * d;
+            comp += sizes[g] * d;
         }
 
         return Math.Max(0.0, ss - (comp * comp / n));

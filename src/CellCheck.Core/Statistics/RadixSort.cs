@@ -89,31 +89,50 @@ internal static class RadixSort
     /// sorted value back with <see cref="ValueOf"/>. Allocates only the two buffers of the passes and the order.</summary>
     public static ulong[] SortedKeys(ReadOnlySpan<double> values, out int[] order)
     {
-        var n = values.Length;
-        var keys = new ulong[n];
-        order = new int[n];
-        for (var i = 0; i < n; i++)
+        var keys = new ulong[values.Length];
+        for (var i = 0; i < keys.Length; i++)
         {
             keys[i] = Key(values[i]);
+        }
+
+        return SortKeys(keys, out order, out _);
+    }
+
+    /// <summary>As <see cref="SortedKeys(ReadOnlySpan{double}, out int[])"/> on keys already made by <see cref="KeyOf"/>:
+    /// <paramref name="keys"/> serves as one of the two buffers of the passes, and <paramref name="free"/> is the other
+    /// (null below the threshold), no longer needed once the sort returns.</summary>
+    public static ulong[] SortKeys(ulong[] keys, out int[] order, out ulong[]? free)
+    {
+        var n = keys.Length;
+        // every buffer below is written in full before it is read: no need for the allocator to clear them first
+        order = GC.AllocateUninitializedArray<int>(n);
+        for (var i = 0; i < n; i++)
+        {
             order[i] = i;
         }
 
         if (n < Threshold)
         {
             Array.Sort(keys, order);
+            free = null;
             return keys;
         }
 
-        var spare = new ulong[n];
-        var carried = new int[n];
+        var spare = GC.AllocateUninitializedArray<ulong>(n);
+        var carried = GC.AllocateUninitializedArray<int>(n);
         if (Passes(keys, spare, order, carried, n))
         {
             order = carried;
+            free = keys;
             return spare;
         }
 
+        free = spare;
         return keys;
     }
+
+    /// <summary>The order-preserving key of a value (−0 sorts with +0).</summary>
+    public static ulong KeyOf(double value) => Key(value);
 
     /// <summary>The value of a key made by this sort.</summary>
     public static double ValueOf(ulong key) => Value(key);

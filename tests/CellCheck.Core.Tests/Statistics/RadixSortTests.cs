@@ -40,6 +40,22 @@ public sealed class RadixSortTests
         Assert.Equal(n, order.Distinct().Count());
     }
 
+    [Theory]
+    [InlineData(5_000)]
+    [InlineData(300_000)]
+    public void Keys_made_beforehand_sort_in_place_and_leave_the_other_buffer_free(int n)
+    {
+        var random = new Random(n);
+        var values = Enumerable.Range(0, n).Select(i => i % 11 == 0 ? -0.0 : Math.Round((random.NextDouble() - 0.5) * 4000) / 16).ToArray();
+        var keys = values.Select(RadixSort.KeyOf).ToArray();
+        var sorted = RadixSort.SortKeys(keys, out var order, out var free);
+        Assert.Equal(values.Select(v => v == 0 ? 0.0 : v).OrderBy(v => v).ToArray(), sorted.Select(RadixSort.ValueOf).ToArray());
+        Assert.Equal(sorted.Select(RadixSort.ValueOf).ToArray(), order.Select(i => values[i] == 0 ? 0.0 : values[i]).ToArray());
+        Assert.Equal(n, order.Distinct().Count());
+        Assert.Equal(n >= RadixSort.Threshold, free is not null);
+        Assert.NotSame(sorted, free);
+    }
+
     [Fact]
     public void Mid_ranks_may_be_written_over_the_values_they_are_ranked_from()
     {

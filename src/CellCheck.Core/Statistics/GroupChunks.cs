@@ -1,0 +1,47 @@
+namespace CellCheck.Core.Statistics;
+
+/// <summary>
+/// Runs work over consecutive ranges of groups, side by side on large data. Each range holds whole groups and at least
+/// <see cref="ChunkRows"/> values (bar the last), so the result of work that writes only its own groups' slots does
+/// not depend on the ranges or their scheduling.
+/// </summary>
+internal static class GroupChunks
+{
+    /// <summary>Values per range; data with fewer values is done in one range on the calling thread.</summary>
+    public const int ChunkRows = 1 << 16;
+
+    /// <summary>Calls <paramref name="body"/>(first group, end group) once per range.</summary>
+    public static void ForEach(int[] starts, Action<int, int> body)
+    {
+        var groups = starts.Length - 1;
+        var bounds = new List<int> { 0 };
+        for (var g = 0; g < groups; g++)
+        {
+            if (starts[g + 1] - starts[bounds[^1]] >= ChunkRows && g + 1 < groups)
+            {
+                bounds.Add(g + 1);
+            }
+        }
+
+        bounds.Add(groups);
+        if (bounds.Count == 2)
+        {
+            body(0, groups);
+            return;
+        }
+
+        Parallel.For(0, bounds.Count - 1, r => body(bounds[r], bounds[r + 1]));
+    }
+
+    /// <summary>The size of the largest of groups <paramref name="first"/> to <paramref name="end"/> − 1.</summary>
+    public static int LargestSize(int[] starts, int first, int end)
+    {
+        var largest = 0;
+        for (var g = first; g < end; g++)
+        {
+            largest = Math.Max(largest, starts[g + 1] - starts[g]);
+        }
+
+        return largest;
+    }
+}

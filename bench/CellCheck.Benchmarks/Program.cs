@@ -8,6 +8,7 @@ namespace CellCheck.Benchmarks;
 /// <c>generate ROWS CELLS DIR</c> writes the seeded screen data and its design;
 /// <c>floor FILE</c> times a bare Sep pass over a file (the parse floor);
 /// <c>read DESIGN</c> times the encoding scan and the read on one thread and in two ranges;
+/// <c>boxcox DESIGN [REPEATS]</c> times the parts of the Box-Cox fit of the blocked model;
 /// <c>dw ROWS CELLS</c> times the Durbin-Watson moment kernels;
 /// <c>kernels [BenchmarkDotNet arguments]</c> runs the kernel suite.
 /// </summary>
@@ -33,6 +34,9 @@ internal static class Program
             case "phases" when args.Length == 2:
                 Phases.Run(args[1]);
                 return 0;
+            case "boxcox" when args.Length is 2 or 3:
+                BoxCoxTiming.Run(args[1], args.Length == 3 ? int.Parse(args[2], CultureInfo.InvariantCulture) : 3);
+                return 0;
             case "read" when args.Length == 2:
                 ReadTiming.Run(args[1]);
                 return 0;
@@ -43,7 +47,7 @@ internal static class Program
                 BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args[1..]);
                 return 0;
             default:
-                Console.Error.WriteLine("usage: generate ROWS CELLS DIR | floor FILE | phases DESIGN | read DESIGN | dw ROWS CELLS | kernels [BenchmarkDotNet arguments]");
+                Console.Error.WriteLine("usage: generate ROWS CELLS DIR | floor FILE | phases DESIGN | boxcox DESIGN [REPEATS] | read DESIGN | dw ROWS CELLS | kernels [BenchmarkDotNet arguments]");
                 return 2;
         }
     }

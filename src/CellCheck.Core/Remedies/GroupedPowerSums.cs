@@ -1,3 +1,4 @@
+using System.Runtime.Intrinsics;
 using CellCheck.Core.Models;
 
 namespace CellCheck.Core.Remedies;
@@ -15,37 +16,49 @@ namespace CellCheck.Core.Remedies;
 /// (from u² = (expm1(2λe) − 2·expm1(λe))/λ², whose linear terms cancel exactly, so no cancellation is left).</para>
 /// <para>The series are summed to <see cref="Terms"/> terms where |λ|·max|e_i| ≤ 1 in the cell; there the
 /// truncation error is below n·2³⁰/30! ≈ 4·10⁻²⁴·n relative to Σe², far below double precision for any n this
-/// tool reads. Cells whose logs spread further are evaluated row by row with <see cref="PreciseMath.ExpM1"/>, as
+/// tool reads. Cells whose logs spread further are evaluated row by row with <see cref="PreciseMath.ExpM1(double)"/>, as
 /// <see cref="BoxCox"/> does for every model. Cells are combined by log-sum-exp, so nothing overflows for large |λ|.</para>
 /// <para>For cells plus additive blocks the groups are the identical settings (a cell within a block): the residual sum
 /// of squares is the within-group part above plus the weighted residual sum of squares of the group means of w on the
 /// model, fitted by <see cref="CellBlockFit"/> with the group sizes as weights (the fit of a model that is constant
 /// within groups splits this way).</para>
+/// <para>The power sums are formed once (<see cref="PowerSumTable"/>); each evaluation sums the series for four groups
+/// at a time (<see cref="PowerSeries"/>), in parallel over ranges of groups, each group into its own slot, the slots
+/// then added in group order, so the value does not depend on the number of threads.</para>
 /// </remarks>
 internal sealed class GroupedPowerSums
 {
     /// <summary>Series terms summed per cell.</summary>
     public const int Terms = 30;
 
-    /// <summary>1/k for k ≤ Terms + 1 (a multiplication in the series loop instead of a division).</summary>
-    private static readonly double[] Reciprocal = [.. Enumerable.Range(0, Terms + 2).Select(k => k == 0 ? 0 : 1.0 / k)];
+    /// <summary>The stopping bound on a series term relative to the sum of squares: far below rounding.</summary>
+    public const double Negligible = 1e-18;
 
-    /// <summary>Groups per parallel work item.</summary>
+    /// <summary>1/k for k ≤ Terms + 1 (a multiplication in the series loop instead of a division).</summary>
+    internal static readonly double[] Reciprocal = [.. Enumerable.Range(0, Terms + 2).Select(k => k == 0 ? 0 : 1.0 / k)];
+
+    /// <summary>Groups per parallel work item (a whole number of blocks).</summary>
     private const int Chunk = 2048;
+
+    /// <summary>Largest group whose transformed values <see cref="Direct"/> keeps on the stack.</summary>
+    private const int StackRows = 256;
 
     private readonly int[] starts;
     private readonly double[] logs;
-    private readonly double[] centre;
-    private readonly double[] reach;
-    private readonly double[] sums;
-    private readonly int[] terms;
+    private readonly PowerSumTable table;
     private readonly double sumLog;
     private readonly CellBlockFit? between;
+
+    // the extreme log-means among the groups that set the scale (none: top is −∞)
+    private readonly bool anyScale;
+    private readonly double lowCentre = double.PositiveInfinity, highCentre = double.NegativeInfinity;
 
     // scratch for one evaluation, reused (the optimiser evaluates one λ at a time)
     private readonly double[] within;
     private readonly double[]? means;
     private readonly double[]? betweenResiduals;
+    private readonly double[] halves;
+    private readonly double[]? nearExpM1;
 
     /// <param name="starts">Group g holds rows starts[g] .. starts[g + 1] − 1 of <paramref name="logs"/>.</param>
     /// <param name="logs">log y of every row, grouped.</param>
@@ -57,13 +70,12 @@ internal sealed class GroupedPowerSums
         this.between = between;
         this.logs = logs;
         var groups = starts.Length - 1;
-        centre = new double[groups];
-        reach = new double[groups];
-        sums = new double[groups * (Terms + 1)];
-        terms = new int[groups];
         within = new double[groups];
         means = between is null ? null : new double[groups];
         betweenResiduals = between is null ? null : new double[groups];
+        table = new PowerSumTable(starts, logs);
+        halves = new double[table.Blocks * PowerSumTable.Lanes];
+        nearExpM1 = between is null ? null : new double[halves.Length];
         foreach (var l in logs)
         {
             sumLog += l;
@@ -71,37 +83,11 @@ internal sealed class GroupedPowerSums
 
         for (var g = 0; g < groups; g++)
         {
-            var cell = logs.AsSpan(starts[g], starts[g + 1] - starts[g]);
-            if (cell.Length == 0)
+            if (starts[g + 1] - starts[g] > (between is null ? 1 : 0))
             {
-                continue;
-            }
-
-            centre[g] = Statistics.Descriptive.Mean(cell);
-            foreach (var l in cell)
-            {
-                reach[g] = Math.Max(reach[g], Math.Abs(l - centre[g]));
-            }
-
-            var kept = terms[g] = TermsWithin(cell.Length, reach[g]);
-            var s = sums.AsSpan(g * (Terms + 1), Terms + 1);
-            foreach (var l in cell)
-            {
-                var e = l - centre[g];
-                var power = e;
-                for (var k = 1; k <= kept; k++)
-                {
-                    s[k] += power;
-                    power *= e;
-                }
-            }
-
-            // stored as S_k / k!
-            var factorial = 1.0;
-            for (var k = 1; k <= Terms; k++)
-            {
-                factorial *= k;
-                s[k] /= factorial;
+                anyScale = true;
+                lowCentre = Math.Min(lowCentre, table.Centre[g]);
+                highCentre = Math.Max(highCentre, table.Centre[g]);
             }
         }
     }
@@ -109,43 +95,21 @@ internal sealed class GroupedPowerSums
     /// <summary>ℓ(λ) as defined by <see cref="BoxCox"/>.</summary>
     public double LogLikelihood(double lambda)
     {
-        var groups = centre.Length;
-        var top = double.NegativeInfinity;
-        for (var g = 0; g < groups; g++)
-        {
-            if (starts[g + 1] - starts[g] > (between is null ? 1 : 0))
-            {
-                top = Math.Max(top, 2 * lambda * centre[g]);
-            }
-        }
+        var groups = within.Length;
+
+        // the largest 2λ·c_g: rounding is monotone, so it is 2λ times the largest (λ ≥ +0) or smallest (λ ≤ −0) c_g
+        var top = !anyScale ? double.NegativeInfinity : 2 * lambda * (double.IsNegative(lambda) ? lowCentre : highCentre);
 
         // with λ·log y_r = top/2: y^(λ) = e^{top/2}·w + constant, and in group g w = A_g·u + B_g
-        var reference = lambda == 0 ? centre[0] : 0;
-        Array.Clear(within);
-        if (means is not null)
-        {
-            Array.Clear(means);
-        }
-        // groups are independent: evaluated in parallel, each into its own slot, then summed in order (deterministic)
+        var reference = lambda == 0 ? table.Centre[0] : 0;
         Parallel.For(0, (groups + Chunk - 1) / Chunk, chunk =>
         {
-            for (var g = chunk * Chunk; g < Math.Min(groups, (chunk + 1) * Chunk); g++)
+            var first = chunk * Chunk / PowerSumTable.Lanes;
+            var last = Math.Min(table.Blocks, (chunk + 1) * Chunk / PowerSumTable.Lanes);
+            Halves(first, last, lambda, top);
+            for (var b = first; b < last; b++)
             {
-                var n = starts[g + 1] - starts[g];
-                if (n == 0)
-                {
-                    continue;
-                }
-
-                var half = (lambda * centre[g]) - (top / 2);
-                var a = Math.Exp(half);
-                var (sum, squares) = Sums(g, n, lambda);
-                within[g] = n > 1 ? a * a * squares : 0;
-                if (means is not null)
-                {
-                    var b = lambda == 0 ? centre[g] - reference : PreciseMath.ExpM1(half) / lambda;
-                    means[g] = (a * sum / n) + b;
-                }
+                Block(b, lambda, reference);
             }
         });
         var total = 0.0;
@@ -168,59 +132,16 @@ internal sealed class GroupedPowerSums
         return ((lambda - 1) * sumLog) - (count / 2.0 * (top + Math.Log(total) - Math.Log(count)));
     }
 
-    /// <summary>Σu and Σu² − (Σu)²/n for group g, with u = expm1(λe)/λ (e at λ = 0).</summary>
-    private (double Sum, double Squares) Sums(int g, int n, double lambda)
-    {
-        if (Math.Abs(lambda) * reach[g] > 1)
-        {
-            return Direct(g, n, lambda);
-        }
-
-        var s = sums.AsSpan(g * (Terms + 1), Terms + 1);
-        double sum = 0, squares = 0, twoPower = 1;
-        double previous = 0, power = 1; // power = λ^(k−1), previous = λ^(k−2)
-        // bound on the k-th squared-series term relative to the sum of squares (which is at least reach²):
-        // 4n·x^(k−2)/k! with x = 2|λ|·reach ≤ 2; stop once it is far below rounding
-        var x = 2 * Math.Abs(lambda) * reach[g];
-        var bound = 2.0 * n;
-        for (var k = 1; k <= terms[g]; k++)
-        {
-            twoPower *= 2;
-            var term = s[k];
-            sum += power * term;
-            if (k >= 2)
-            {
-                squares += (twoPower - 2) * previous * term;
-                if (bound < 1e-18)
-                {
-                    break;
-                }
-
-                bound *= x * Reciprocal[k + 1];
-            }
-
-            previous = power;
-            power *= lambda;
-        }
-
-        if (bound >= 1e-18 && terms[g] < Terms)
-        {
-            return Direct(g, n, lambda); // |λ| beyond the search range: more terms than were summed would be needed
-        }
-
-        return (sum, squares - (sum * sum / n));
-    }
-
-    /// <summary>The number of series terms that <see cref="Sums"/> uses at most for a group of n values whose centred logs
+    /// <summary>The number of series terms that the series uses at most for a group of n values whose centred logs
     /// reach <paramref name="reach"/>, over the whole search range of λ (the same stopping rule at the largest |λ|, on the
     /// series route): power sums above it are never read, so they are not formed.</summary>
-    private static int TermsWithin(int n, double reach)
+    internal static int TermsWithin(int n, double reach)
     {
         var x = 2 * Math.Min(1.0, Math.Max(-BoxCox.SearchLower, BoxCox.SearchUpper) * reach);
         var bound = 2.0 * n;
         for (var k = 2; k <= Terms; k++)
         {
-            if (bound < 1e-18)
+            if (bound < Negligible)
             {
                 return k;
             }
@@ -231,20 +152,88 @@ internal sealed class GroupedPowerSums
         return Terms;
     }
 
+    /// <summary>λ·c_g − top/2 for the groups of blocks first .. last − 1, and its expm1 where it is below 1/2 in size.</summary>
+    private void Halves(int first, int last, double lambda, double top)
+    {
+        var (l, t) = (Vector256.Create(lambda), Vector256.Create(top / 2));
+        for (var b = first; b < last; b++)
+        {
+            ((l * PowerSumTable.Block(table.Centre, b)) - t).CopyTo(halves.AsSpan(b * PowerSumTable.Lanes));
+        }
+
+        if (nearExpM1 is not null && lambda != 0)
+        {
+            var range = new Range(first * PowerSumTable.Lanes, last * PowerSumTable.Lanes);
+            PreciseMath.ExpM1Near(halves.AsSpan(range), nearExpM1.AsSpan(range));
+        }
+    }
+
+    /// <summary>Within-group sum of squares and mean of w for the groups of block b.</summary>
+    private void Block(int b, double lambda, double reference)
+    {
+        var (sums, squares, bounds) = PowerSeries.Block(table, b, lambda);
+        for (var lane = 0; lane < PowerSumTable.Lanes; lane++)
+        {
+            var g = (b * PowerSumTable.Lanes) + lane;
+            var n = g < within.Length ? starts[g + 1] - starts[g] : 0;
+            if (n == 0)
+            {
+                if (g < within.Length)
+                {
+                    within[g] = 0;
+                    means?[g] = 0;
+                }
+
+                continue;
+            }
+
+            // the series where it converges: |λ|·reach ≤ 1, and the terms kept suffice (always, inside the search range)
+            double sum, spread;
+            if (Math.Abs(lambda) * table.Reach[g] > 1 || (bounds.GetElement(lane) >= Negligible && table.Terms[g] < Terms))
+            {
+                (sum, spread) = Direct(g, n, lambda);
+            }
+            else
+            {
+                sum = sums.GetElement(lane);
+                spread = squares.GetElement(lane) - (sum * sum / n);
+            }
+
+            var half = halves[g];
+            var a = Math.Exp(half);
+            within[g] = n > 1 ? a * a * spread : 0;
+            if (means is not null)
+            {
+                var shift = lambda == 0 ? table.Centre[g] - reference : (Math.Abs(half) < 0.5 ? nearExpM1![g] : PreciseMath.ExpM1(half, a)) / lambda;
+                means[g] = (a * sum / n) + shift;
+            }
+        }
+    }
+
+    /// <summary>Σu and Σu² − (Σu)²/n for group g row by row, with u = expm1(λe)/λ.</summary>
     private (double Sum, double Squares) Direct(int g, int n, double lambda)
     {
         var cell = logs.AsSpan(starts[g], n);
+        var rented = n > StackRows ? System.Buffers.ArrayPool<double>.Shared.Rent(n) : null;
+        var u = rented is null ? stackalloc double[StackRows] : rented.AsSpan();
+        var centre = table.Centre[g];
         double sum = 0, squares = 0;
-        foreach (var l in cell)
+        for (var i = 0; i < n; i++)
         {
-            sum += PreciseMath.ExpM1(lambda * (l - centre[g])) / lambda;
+            u[i] = PreciseMath.ExpM1(lambda * (cell[i] - centre)) / lambda;
+            sum += u[i];
         }
 
         var mean = sum / n;
-        foreach (var l in cell)
+        for (var i = 0; i < n; i++)
         {
-            var d = (PreciseMath.ExpM1(lambda * (l - centre[g])) / lambda) - mean;
+            var d = u[i] - mean;
             squares += d * d;
+        }
+
+        if (rented is not null)
+        {
+            System.Buffers.ArrayPool<double>.Shared.Return(rented);
         }
 
         return (sum, squares);

@@ -30,6 +30,7 @@ internal static class ProfileLikelihood
     public static (double Lambda, double Max, double? Lower, double? Upper) Maximise(Func<double, double> logLikelihood, double lower, double upper,
         double gridStep = GridStep)
     {
+        logLikelihood = new RememberedProfile(logLikelihood).At;
         var steps = (int)Math.Round((upper - lower) / gridStep);
         var grid = new double[steps + 1];
         var values = new double[steps + 1];

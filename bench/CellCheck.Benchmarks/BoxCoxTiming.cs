@@ -35,7 +35,8 @@ internal static class BoxCoxTiming
             Time("rss of y", () => rss.Of(y));
             var logs = Array.ConvertAll(settings.Permutation, i => Math.Log(y[i]));
             var table = new PowerSumTable(settings.Starts, logs);
-            Console.WriteLine($"groups {table.Groups} mean size {table.Size.Average()} mean terms {table.Terms.Average()} max reach {table.Reach.Max()} mean reach {table.Reach.Average()} stored {table.Sums.Length}");
+            Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
+                $"{table.Groups} groups, mean size {table.Size.Average():F1}, series terms kept {table.Terms.Average():F1} on average, {table.Sums.Length} power sums stored"));
             var sums = Time("power sums", () => new GroupedPowerSums(settings.Starts, logs, settings.Between));
             Time("41 evaluations", () => Enumerable.Range(0, 41).Sum(k => sums.LogLikelihood(-5 + (k * 0.25))));
             Time("box-cox fit", () => BoxCox.Fit(rss, y, fitted.Name, 0));

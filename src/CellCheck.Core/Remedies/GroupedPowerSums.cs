@@ -70,10 +70,10 @@ internal sealed class GroupedPowerSums
         this.between = between;
         this.logs = logs;
         var groups = starts.Length - 1;
-        within = new double[groups];
-        means = between is null ? null : new double[groups];
-        betweenResiduals = between is null ? null : new double[groups];
         table = new PowerSumTable(starts, logs);
+        within = new double[table.Blocks * PowerSumTable.Lanes];
+        means = between is null ? null : new double[within.Length];
+        betweenResiduals = between is null ? null : new double[groups];
         halves = new double[table.Blocks * PowerSumTable.Lanes];
         nearExpM1 = between is null ? null : new double[halves.Length];
         foreach (var l in logs)
@@ -95,7 +95,7 @@ internal sealed class GroupedPowerSums
     /// <summary>ℓ(λ) as defined by <see cref="BoxCox"/>.</summary>
     public double LogLikelihood(double lambda)
     {
-        var groups = within.Length;
+        var groups = table.Groups;
 
         // the largest 2λ·c_g: rounding is monotone, so it is 2λ times the largest (λ ≥ +0) or smallest (λ ≤ −0) c_g
         var top = !anyScale ? double.NegativeInfinity : 2 * lambda * (double.IsNegative(lambda) ? lowCentre : highCentre);
@@ -113,7 +113,7 @@ internal sealed class GroupedPowerSums
             }
         });
         var total = 0.0;
-        foreach (var part in within)
+        foreach (var part in within.AsSpan(0, groups))
         {
             total += part;
         }
@@ -121,7 +121,7 @@ internal sealed class GroupedPowerSums
         if (means is not null)
         {
             var residuals = betweenResiduals!;
-            between!.Residualize(means, residuals);
+            between!.Residualize(means.AsSpan(0, groups), residuals);
             for (var g = 0; g < groups; g++)
             {
                 total += (starts[g + 1] - starts[g]) * residuals[g] * residuals[g];
@@ -168,46 +168,63 @@ internal sealed class GroupedPowerSums
         }
     }
 
-    /// <summary>Within-group sum of squares and mean of w for the groups of block b.</summary>
+    /// <summary>Within-group sum of squares and mean of w for the groups of block b, lane by lane the same operations as
+    /// for one group: A_g = e^{half}, within = A_g²·(Σu² − (Σu)²/n) (0 for a single row), mean = A_g·Σu/n + B_g.</summary>
     private void Block(int b, double lambda, double reference)
     {
         var (sums, squares, bounds) = PowerSeries.Block(table, b, lambda);
+        var lanes = new Range(b * PowerSumTable.Lanes, (b + 1) * PowerSumTable.Lanes);
+        var size = PowerSumTable.Block(table.Size, b);
+        var half = Vector256.Create(halves.AsSpan(lanes));
+        var a = Vector256.Create(Math.Exp(half.GetElement(0)), Math.Exp(half.GetElement(1)), Math.Exp(half.GetElement(2)), Math.Exp(half.GetElement(3)));
+        var spread = squares - (sums * sums / size);
+        Vector256.ConditionalSelect(Vector256.GreaterThan(size, Vector256<double>.One), a * a * spread, Vector256<double>.Zero).CopyTo(within.AsSpan(lanes));
+        Vector256<double> shift = default;
+        if (means is not null)
+        {
+            shift = lambda == 0 ? PowerSumTable.Block(table.Centre, b) - Vector256.Create(reference) : Shifts(b, half, a, lambda);
+            var mean = ((a * sums) / size) + shift;
+            Vector256.ConditionalSelect(Vector256.Equals(size, Vector256<double>.Zero), Vector256<double>.Zero, mean).CopyTo(means.AsSpan(lanes));
+        }
+
+        // the series where it converges: |λ|·reach ≤ 1, and the terms kept suffice (always, inside the search range);
+        // elsewhere row by row
+        var wide = Vector256.GreaterThan(Vector256.Create(Math.Abs(lambda)) * PowerSumTable.Block(table.Reach, b), Vector256<double>.One)
+            | (Vector256.GreaterThanOrEqual(bounds, Vector256.Create(Negligible)) & Vector256.LessThan(PowerSumTable.Block(table.Terms, b), Vector256.Create((double)Terms)));
+        var direct = (wide & Vector256.GreaterThan(size, Vector256<double>.Zero)).ExtractMostSignificantBits();
+        for (var lane = 0; direct != 0; lane++, direct >>= 1)
+        {
+            if ((direct & 1) != 0)
+            {
+                var g = (b * PowerSumTable.Lanes) + lane;
+                var n = starts[g + 1] - starts[g];
+                var (sum, spreadRow) = Direct(g, n, lambda);
+                var ag = a.GetElement(lane);
+                within[g] = n > 1 ? ag * ag * spreadRow : 0;
+                means?[g] = (ag * sum / n) + shift.GetElement(lane);
+            }
+        }
+    }
+
+    /// <summary>B_g·λ = expm1(half) for the lanes of block b (λ ≠ 0): the series already formed where |half| &lt; 1/2,
+    /// else from the exponential A_g.</summary>
+    private Vector256<double> Shifts(int b, Vector256<double> half, Vector256<double> a, double lambda)
+    {
+        var lanes = new Range(b * PowerSumTable.Lanes, (b + 1) * PowerSumTable.Lanes);
+        var far = Vector256.GreaterThanOrEqual(Vector256.Abs(half), Vector256.Create(0.5)).ExtractMostSignificantBits();
+        if (far == 0)
+        {
+            return Vector256.Create(nearExpM1.AsSpan(lanes)) / Vector256.Create(lambda);
+        }
+
+        Span<double> expm1 = stackalloc double[PowerSumTable.Lanes];
         for (var lane = 0; lane < PowerSumTable.Lanes; lane++)
         {
             var g = (b * PowerSumTable.Lanes) + lane;
-            var n = g < within.Length ? starts[g + 1] - starts[g] : 0;
-            if (n == 0)
-            {
-                if (g < within.Length)
-                {
-                    within[g] = 0;
-                    means?[g] = 0;
-                }
-
-                continue;
-            }
-
-            // the series where it converges: |λ|·reach ≤ 1, and the terms kept suffice (always, inside the search range)
-            double sum, spread;
-            if (Math.Abs(lambda) * table.Reach[g] > 1 || (bounds.GetElement(lane) >= Negligible && table.Terms[g] < Terms))
-            {
-                (sum, spread) = Direct(g, n, lambda);
-            }
-            else
-            {
-                sum = sums.GetElement(lane);
-                spread = squares.GetElement(lane) - (sum * sum / n);
-            }
-
-            var half = halves[g];
-            var a = Math.Exp(half);
-            within[g] = n > 1 ? a * a * spread : 0;
-            if (means is not null)
-            {
-                var shift = lambda == 0 ? table.Centre[g] - reference : (Math.Abs(half) < 0.5 ? nearExpM1![g] : PreciseMath.ExpM1(half, a)) / lambda;
-                means[g] = (a * sum / n) + shift;
-            }
+            expm1[lane] = (far & (1u << lane)) != 0 ? PreciseMath.ExpM1(halves[g], a.GetElement(lane)) : nearExpM1![g];
         }
+
+        return Vector256.Create(expm1) / Vector256.Create(lambda);
     }
 
     /// <summary>Σu and Σu² − (Σu)²/n for group g row by row, with u = expm1(λe)/λ.</summary>

@@ -66,11 +66,12 @@ internal sealed class PowerSumTable
         Parallel.For(0, chunks, chunk =>
         {
             Span<double> accumulated = stackalloc double[GroupedPowerSums.Terms + 1];
+            Span<double> powers = stackalloc double[RowPowers.Scratch];
             for (var g = chunk * Chunk; g < Math.Min(Groups, (chunk + 1) * Chunk); g++)
             {
                 var kept = (int)Terms[g];
                 accumulated.Clear();
-                RowPowers.Accumulate(logs.AsSpan(starts[g], starts[g + 1] - starts[g]), Centre[g], kept, accumulated);
+                RowPowers.Accumulate(logs.AsSpan(starts[g], starts[g + 1] - starts[g]), Centre[g], kept, accumulated, powers);
                 var offset = Offsets[g / Lanes] + (g % Lanes);
                 var factorial = 1.0;
                 for (var k = 1; k <= kept; k++)

@@ -13,10 +13,13 @@ internal static class RowPowers
 {
     private const int Tile = 2 * PowerSumTable.Lanes;
 
+    /// <summary>The length of the scratch that <see cref="Accumulate"/> needs.</summary>
+    public const int Scratch = Tile * GroupedPowerSums.Terms;
+
     /// <summary>Adds Σ (x_i − <paramref name="centre"/>)^k, in row order, to sums[k] for k = 1..<paramref name="terms"/>.</summary>
-    public static void Accumulate(ReadOnlySpan<double> x, double centre, int terms, Span<double> sums)
+    /// <param name="powers">Scratch of at least <see cref="Scratch"/> values (the caller's, reused across groups).</param>
+    public static void Accumulate(ReadOnlySpan<double> x, double centre, int terms, Span<double> sums, Span<double> powers)
     {
-        Span<double> powers = stackalloc double[Tile * GroupedPowerSums.Terms];
         Span<double> tile = stackalloc double[Tile];
         var c = Vector256.Create(centre);
         for (var start = 0; start < x.Length; start += Tile)

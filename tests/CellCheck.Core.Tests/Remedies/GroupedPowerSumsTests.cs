@@ -114,7 +114,7 @@ public sealed class GroupedPowerSumsTests
                 }
 
                 var actual = new double[GroupedPowerSums.Terms + 1];
-                RowPowers.Accumulate(x, centre, terms, actual);
+                RowPowers.Accumulate(x, centre, terms, actual, new double[RowPowers.Scratch]);
                 Assert.Equal(expected, actual);
             }
         }

@@ -12,7 +12,8 @@ namespace CellCheck.Core.Remedies;
 /// refines it between the grid neighbours. λ̂ is determined to about √ε relative: ℓ is flat at its maximum, so no
 /// optimiser can place it more closely in double precision. The interval ends are the first crossings of the cut
 /// going outward from λ̂ (scanned on the grid, then located by Brent's root finder to 1e-12): when the
-/// region above the cut is not connected, the part holding λ̂ is reported.
+/// region above the cut is not connected, the part holding λ̂ is reported. Each distinct λ is evaluated once
+/// (<see cref="RememberedProfile"/>): the root searches start from grid points and λ̂, whose values are known.
 /// </remarks>
 internal static class ProfileLikelihood
 {

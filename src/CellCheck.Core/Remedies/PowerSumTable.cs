@@ -8,7 +8,8 @@ namespace CellCheck.Core.Remedies;
 /// <see cref="PowerSeries"/>: groups in blocks of <see cref="Lanes"/>, block b holding term k of its lanes at
 /// Sums[Offsets[b] + (k − 1)·Lanes + lane] for k up to the block's largest term count (so only the terms a group
 /// can use are stored). Built in parallel over groups; every group's numbers are formed in the same order as the
-/// plain one-row-at-a-time loops (sums in row order, powers by repeated multiplication), so they are the same doubles.
+/// plain one-row-at-a-time loops (sums in row order, powers by repeated multiplication), so they are the same doubles
+/// (<see cref="BlockPowers"/>).
 /// </summary>
 internal sealed class PowerSumTable
 {
@@ -65,20 +66,10 @@ internal sealed class PowerSumTable
         Sums = new double[Offsets[Blocks]];
         Parallel.For(0, chunks, chunk =>
         {
-            Span<double> accumulated = stackalloc double[GroupedPowerSums.Terms + 1];
-            Span<double> powers = stackalloc double[RowPowers.Scratch];
-            for (var g = chunk * Chunk; g < Math.Min(Groups, (chunk + 1) * Chunk); g++)
+            Span<double> accumulated = stackalloc double[BlockPowers.Scratch];
+            for (var b = chunk * Chunk / Lanes; b < Math.Min(Blocks, (chunk + 1) * Chunk / Lanes); b++)
             {
-                var kept = (int)Terms[g];
-                accumulated.Clear();
-                RowPowers.Accumulate(logs.AsSpan(starts[g], starts[g + 1] - starts[g]), Centre[g], kept, accumulated, powers);
-                var offset = Offsets[g / Lanes] + (g % Lanes);
-                var factorial = 1.0;
-                for (var k = 1; k <= kept; k++)
-                {
-                    factorial *= k;
-                    Sums[offset + ((k - 1) * Lanes)] = accumulated[k] / factorial; // stored as S_k / k!
-                }
+                BlockPowers.Fill(starts, logs, this, b, Sums.AsSpan(Offsets[b], Offsets[b + 1] - Offsets[b]), accumulated);
             }
         });
     }

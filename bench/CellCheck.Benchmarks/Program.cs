@@ -9,6 +9,7 @@ namespace CellCheck.Benchmarks;
 /// <c>floor FILE</c> times a bare Sep pass over a file (the parse floor);
 /// <c>read DESIGN [WARMUP]</c> times the encoding scan and the read on one thread and in two ranges;
 /// <c>pooled ROWS</c> times the pooled normality kernels;
+/// <c>boxcox DESIGN [REPEATS]</c> times the parts of the Box-Cox fit of the blocked model;
 /// <c>dw ROWS CELLS</c> times the Durbin-Watson moment kernels;
 /// <c>spread ROWS CELLS</c> times the spread tests together and each alone;
 /// <c>kernels [BenchmarkDotNet arguments]</c> runs the kernel suite.
@@ -41,6 +42,9 @@ internal static class Program
             case "pooled" when args.Length == 2:
                 PooledTiming.Run(int.Parse(args[1], CultureInfo.InvariantCulture));
                 return 0;
+            case "boxcox" when args.Length is 2 or 3:
+                BoxCoxTiming.Run(args[1], args.Length == 3 ? int.Parse(args[2], CultureInfo.InvariantCulture) : 3);
+                return 0;
             case "dw" when args.Length == 3:
                 OrderTiming.Run(int.Parse(args[1], CultureInfo.InvariantCulture), int.Parse(args[2], CultureInfo.InvariantCulture));
                 return 0;
@@ -51,7 +55,7 @@ internal static class Program
                 BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args[1..]);
                 return 0;
             default:
-                Console.Error.WriteLine("usage: generate ROWS CELLS DIR | floor FILE | phases DESIGN | read DESIGN [WARMUP] | pooled ROWS | dw ROWS CELLS | spread ROWS CELLS | kernels [BenchmarkDotNet arguments]");
+                Console.Error.WriteLine("usage: generate ROWS CELLS DIR | floor FILE | phases DESIGN | read DESIGN [WARMUP] | pooled ROWS | boxcox DESIGN [REPEATS] | dw ROWS CELLS | spread ROWS CELLS | kernels [BenchmarkDotNet arguments]");
                 return 2;
         }
     }

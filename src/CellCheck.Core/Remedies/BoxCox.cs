@@ -57,7 +57,19 @@ public static class BoxCox
         return Fit(new ProjectedRss(x), y, model, shift);
     }
 
-    internal static PowerFit Fit(IResidualSumOfSquares rss, double[] y, string model, double shift)
+    internal static PowerFit Fit(IResidualSumOfSquares rss, double[] y, string model, double shift) =>
+        Fit(rss, y.Length, () => rss switch
+        {
+            GroupedRss grouped => new GroupedPowerSums(grouped.Starts, Logs(y)).LogLikelihood,
+            SettingRss settings => new GroupedPowerSums(settings.Starts, Logs(y, settings.Permutation), settings.Between).LogLikelihood,
+            _ => ProfileOf(rss, Logs(y)),
+        }, model, shift);
+
+    /// <summary>The fit on cells plus blocks with y read on demand (the same fit as for its copy).</summary>
+    internal static PowerFit Fit(SettingRss settings, ShiftedValues y, string model, double shift) =>
+        Fit(settings, y.Length, () => new GroupedPowerSums(settings.Starts, SettingLogs.Of(y, settings.Permutation), settings.Between).LogLikelihood, model, shift);
+
+    private static PowerFit Fit(IResidualSumOfSquares rss, int n, Func<Func<double, double>> profileOf, string model, double shift)
     {
         ArgumentNullException.ThrowIfNull(model);
         if (rss.ResidualDf < 1)
@@ -65,16 +77,11 @@ public static class BoxCox
             throw new ArgumentException("the model leaves no residual degrees of freedom", nameof(rss));
         }
 
-        Func<double, double> profile = rss switch
-        {
-            GroupedRss grouped => new GroupedPowerSums(grouped.Starts, Logs(y)).LogLikelihood,
-            SettingRss settings => new GroupedPowerSums(settings.Starts, Logs(y, settings.Permutation), settings.Between).LogLikelihood,
-            _ => ProfileOf(rss, Logs(y)),
-        };
-        var groups = rss switch { GroupedRss g => g.Starts.Length, SettingRss s => s.Starts.Length, _ => y.Length };
+        var profile = profileOf();
+        var groups = rss switch { GroupedRss g => g.Starts.Length, SettingRss s => s.Starts.Length, _ => n };
         var step = groups > CoarseGroups ? ProfileLikelihood.CoarseStep : ProfileLikelihood.GridStep;
         var (lambda, max, lower, upper) = ProfileLikelihood.Maximise(profile, SearchLower, SearchUpper, step);
-        return new PowerFit(PowerFamily.BoxCox, model, y.Length, rss.ResidualDf, lambda, max, lower, upper, SearchLower, SearchUpper, shift);
+        return new PowerFit(PowerFamily.BoxCox, model, n, rss.ResidualDf, lambda, max, lower, upper, SearchLower, SearchUpper, shift);
     }
 
     internal static double LogLikelihood(IResidualSumOfSquares rss, double[] logs, double lambda)

@@ -15,34 +15,42 @@ namespace CellCheck.Core.Remedies;
 /// (from u² = (expm1(2λe) − 2·expm1(λe))/λ², whose linear terms cancel exactly, so no cancellation is left).</para>
 /// <para>The series are summed to <see cref="Terms"/> terms where |λ|·max|e_i| ≤ 1 in the cell; there the
 /// truncation error is below n·2³⁰/30! ≈ 4·10⁻²⁴·n relative to Σe², far below double precision for any n this
-/// tool reads. Cells whose logs spread further are evaluated row by row with <see cref="PreciseMath.ExpM1"/>, as
+/// tool reads. Cells whose logs spread further are evaluated row by row with <see cref="PreciseMath.ExpM1(double)"/>, as
 /// <see cref="BoxCox"/> does for every model. Cells are combined by log-sum-exp, so nothing overflows for large |λ|.</para>
 /// <para>For cells plus additive blocks the groups are the identical settings (a cell within a block): the residual sum
 /// of squares is the within-group part above plus the weighted residual sum of squares of the group means of w on the
 /// model, fitted by <see cref="CellBlockFit"/> with the group sizes as weights (the fit of a model that is constant
 /// within groups splits this way).</para>
+/// <para>The power sums are formed once (<see cref="PowerSumTable"/>); each evaluation sums the series for four groups
+/// at a time (<see cref="PowerSeries"/>, <see cref="BlockEvaluation"/>), in parallel over ranges of groups, each group into its own slot, the slots
+/// then added in group order, so the value does not depend on the number of threads.</para>
 /// </remarks>
 internal sealed class GroupedPowerSums
 {
     /// <summary>Series terms summed per cell.</summary>
     public const int Terms = 30;
 
-    /// <summary>1/k for k ≤ Terms + 1 (a multiplication in the series loop instead of a division).</summary>
-    private static readonly double[] Reciprocal = [.. Enumerable.Range(0, Terms + 2).Select(k => k == 0 ? 0 : 1.0 / k)];
+    /// <summary>The stopping bound on a series term relative to the sum of squares: far below rounding.</summary>
+    public const double Negligible = 1e-18;
 
-    /// <summary>Groups per parallel work item.</summary>
+    /// <summary>1/k for k ≤ Terms + 1 (a multiplication in the series loop instead of a division).</summary>
+    internal static readonly double[] Reciprocal = [.. Enumerable.Range(0, Terms + 2).Select(k => k == 0 ? 0 : 1.0 / k)];
+
+    /// <summary>Groups per parallel work item (a whole number of blocks).</summary>
     private const int Chunk = 2048;
 
     private readonly int[] starts;
     private readonly double[] logs;
-    private readonly double[] centre;
-    private readonly double[] reach;
-    private readonly double[] sums;
-    private readonly int[] terms;
+    private readonly PowerSumTable table;
     private readonly double sumLog;
     private readonly CellBlockFit? between;
 
+    // the extreme log-means among the groups that set the scale (none: top is −∞)
+    private readonly bool anyScale;
+    private readonly double lowCentre = double.PositiveInfinity, highCentre = double.NegativeInfinity;
+
     // scratch for one evaluation, reused (the optimiser evaluates one λ at a time)
+    private readonly BlockEvaluation blocks;
     private readonly double[] within;
     private readonly double[]? means;
     private readonly double[]? betweenResiduals;
@@ -57,13 +65,11 @@ internal sealed class GroupedPowerSums
         this.between = between;
         this.logs = logs;
         var groups = starts.Length - 1;
-        centre = new double[groups];
-        reach = new double[groups];
-        sums = new double[groups * (Terms + 1)];
-        terms = new int[groups];
-        within = new double[groups];
-        means = between is null ? null : new double[groups];
+        table = new PowerSumTable(starts, logs);
+        within = new double[table.Blocks * PowerSumTable.Lanes];
+        means = between is null ? null : new double[within.Length];
         betweenResiduals = between is null ? null : new double[groups];
+        blocks = new BlockEvaluation(starts, logs, table, within, means);
         foreach (var l in logs)
         {
             sumLog += l;
@@ -71,37 +77,11 @@ internal sealed class GroupedPowerSums
 
         for (var g = 0; g < groups; g++)
         {
-            var cell = logs.AsSpan(starts[g], starts[g + 1] - starts[g]);
-            if (cell.Length == 0)
+            if (starts[g + 1] - starts[g] > (between is null ? 1 : 0))
             {
-                continue;
-            }
-
-            centre[g] = Statistics.Descriptive.Mean(cell);
-            foreach (var l in cell)
-            {
-                reach[g] = Math.Max(reach[g], Math.Abs(l - centre[g]));
-            }
-
-            var kept = terms[g] = TermsWithin(cell.Length, reach[g]);
-            var s = sums.AsSpan(g * (Terms + 1), Terms + 1);
-            foreach (var l in cell)
-            {
-                var e = l - centre[g];
-                var power = e;
-                for (var k = 1; k <= kept; k++)
-                {
-                    s[k] += power;
-                    power *= e;
-                }
-            }
-
-            // stored as S_k / k!
-            var factorial = 1.0;
-            for (var k = 1; k <= Terms; k++)
-            {
-                factorial *= k;
-                s[k] /= factorial;
+                anyScale = true;
+                lowCentre = Math.Min(lowCentre, table.Centre[g]);
+                highCentre = Math.Max(highCentre, table.Centre[g]);
             }
         }
     }
@@ -109,47 +89,21 @@ internal sealed class GroupedPowerSums
     /// <summary>ℓ(λ) as defined by <see cref="BoxCox"/>.</summary>
     public double LogLikelihood(double lambda)
     {
-        var groups = centre.Length;
-        var top = double.NegativeInfinity;
-        for (var g = 0; g < groups; g++)
-        {
-            if (starts[g + 1] - starts[g] > (between is null ? 1 : 0))
-            {
-                top = Math.Max(top, 2 * lambda * centre[g]);
-            }
-        }
+        var groups = table.Groups;
+
+        // the largest 2λ·c_g: rounding is monotone, so it is 2λ times the largest (λ ≥ +0) or smallest (λ ≤ −0) c_g
+        var top = !anyScale ? double.NegativeInfinity : 2 * lambda * (double.IsNegative(lambda) ? lowCentre : highCentre);
 
         // with λ·log y_r = top/2: y^(λ) = e^{top/2}·w + constant, and in group g w = A_g·u + B_g
-        var reference = lambda == 0 ? centre[0] : 0;
-        Array.Clear(within);
-        if (means is not null)
-        {
-            Array.Clear(means);
-        }
-        // groups are independent: evaluated in parallel, each into its own slot, then summed in order (deterministic)
+        var reference = lambda == 0 ? table.Centre[0] : 0;
         Parallel.For(0, (groups + Chunk - 1) / Chunk, chunk =>
         {
-            for (var g = chunk * Chunk; g < Math.Min(groups, (chunk + 1) * Chunk); g++)
-            {
-                var n = starts[g + 1] - starts[g];
-                if (n == 0)
-                {
-                    continue;
-                }
-
-                var half = (lambda * centre[g]) - (top / 2);
-                var a = Math.Exp(half);
-                var (sum, squares) = Sums(g, n, lambda);
-                within[g] = n > 1 ? a * a * squares : 0;
-                if (means is not null)
-                {
-                    var b = lambda == 0 ? centre[g] - reference : PreciseMath.ExpM1(half) / lambda;
-                    means[g] = (a * sum / n) + b;
-                }
-            }
+            var first = chunk * Chunk / PowerSumTable.Lanes;
+            var last = Math.Min(table.Blocks, (chunk + 1) * Chunk / PowerSumTable.Lanes);
+            blocks.Evaluate(first, last, lambda, top, reference);
         });
         var total = 0.0;
-        foreach (var part in within)
+        foreach (var part in within.AsSpan(0, groups))
         {
             total += part;
         }
@@ -157,7 +111,7 @@ internal sealed class GroupedPowerSums
         if (means is not null)
         {
             var residuals = betweenResiduals!;
-            between!.Residualize(means, residuals);
+            between!.Residualize(means.AsSpan(0, groups), residuals);
             for (var g = 0; g < groups; g++)
             {
                 total += (starts[g + 1] - starts[g]) * residuals[g] * residuals[g];
@@ -168,59 +122,16 @@ internal sealed class GroupedPowerSums
         return ((lambda - 1) * sumLog) - (count / 2.0 * (top + Math.Log(total) - Math.Log(count)));
     }
 
-    /// <summary>Σu and Σu² − (Σu)²/n for group g, with u = expm1(λe)/λ (e at λ = 0).</summary>
-    private (double Sum, double Squares) Sums(int g, int n, double lambda)
-    {
-        if (Math.Abs(lambda) * reach[g] > 1)
-        {
-            return Direct(g, n, lambda);
-        }
-
-        var s = sums.AsSpan(g * (Terms + 1), Terms + 1);
-        double sum = 0, squares = 0, twoPower = 1;
-        double previous = 0, power = 1; // power = λ^(k−1), previous = λ^(k−2)
-        // bound on the k-th squared-series term relative to the sum of squares (which is at least reach²):
-        // 4n·x^(k−2)/k! with x = 2|λ|·reach ≤ 2; stop once it is far below rounding
-        var x = 2 * Math.Abs(lambda) * reach[g];
-        var bound = 2.0 * n;
-        for (var k = 1; k <= terms[g]; k++)
-        {
-            twoPower *= 2;
-            var term = s[k];
-            sum += power * term;
-            if (k >= 2)
-            {
-                squares += (twoPower - 2) * previous * term;
-                if (bound < 1e-18)
-                {
-                    break;
-                }
-
-                bound *= x * Reciprocal[k + 1];
-            }
-
-            previous = power;
-            power *= lambda;
-        }
-
-        if (bound >= 1e-18 && terms[g] < Terms)
-        {
-            return Direct(g, n, lambda); // |λ| beyond the search range: more terms than were summed would be needed
-        }
-
-        return (sum, squares - (sum * sum / n));
-    }
-
-    /// <summary>The number of series terms that <see cref="Sums"/> uses at most for a group of n values whose centred logs
+    /// <summary>The number of series terms that the series uses at most for a group of n values whose centred logs
     /// reach <paramref name="reach"/>, over the whole search range of λ (the same stopping rule at the largest |λ|, on the
     /// series route): power sums above it are never read, so they are not formed.</summary>
-    private static int TermsWithin(int n, double reach)
+    internal static int TermsWithin(int n, double reach)
     {
         var x = 2 * Math.Min(1.0, Math.Max(-BoxCox.SearchLower, BoxCox.SearchUpper) * reach);
         var bound = 2.0 * n;
         for (var k = 2; k <= Terms; k++)
         {
-            if (bound < 1e-18)
+            if (bound < Negligible)
             {
                 return k;
             }
@@ -229,24 +140,5 @@ internal sealed class GroupedPowerSums
         }
 
         return Terms;
-    }
-
-    private (double Sum, double Squares) Direct(int g, int n, double lambda)
-    {
-        var cell = logs.AsSpan(starts[g], n);
-        double sum = 0, squares = 0;
-        foreach (var l in cell)
-        {
-            sum += PreciseMath.ExpM1(lambda * (l - centre[g])) / lambda;
-        }
-
-        var mean = sum / n;
-        foreach (var l in cell)
-        {
-            var d = (PreciseMath.ExpM1(lambda * (l - centre[g])) / lambda) - mean;
-            squares += d * d;
-        }
-
-        return (sum, squares);
     }
 }

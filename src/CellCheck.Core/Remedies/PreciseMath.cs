@@ -1,3 +1,5 @@
+using System.Runtime.Intrinsics;
+
 namespace CellCheck.Core.Remedies;
 
 /// <summary>
@@ -25,7 +27,11 @@ internal static class PreciseMath
     }
 
     /// <summary>e^x − 1.</summary>
-    public static double ExpM1(double x)
+    public static double ExpM1(double x) => ExpM1(x, double.NaN);
+
+    /// <summary>e^x − 1, given <paramref name="exp"/> = Math.Exp(x) when the caller has it already (NaN when not):
+    /// the same double as <see cref="ExpM1(double)"/>, without computing the exponential again.</summary>
+    public static double ExpM1(double x, double exp)
     {
         if (Math.Abs(x) < 0.5)
         {
@@ -39,7 +45,7 @@ internal static class PreciseMath
             return sum * x;
         }
 
-        var u = Math.Exp(x);
+        var u = double.IsNaN(exp) ? Math.Exp(x) : exp;
         if (u == 1)
         {
             return x;
@@ -47,6 +53,29 @@ internal static class PreciseMath
 
         var um1 = u - 1;
         return um1 == -1 || double.IsInfinity(u) ? um1 : um1 * x / Math.Log(u);
+    }
+
+    /// <summary>e^x − 1 for each x with |x| &lt; 1/2, by the same series and the same operations as
+    /// <see cref="ExpM1(double)"/> there (so the same doubles); other entries get meaningless values. The length is a
+    /// multiple of four. The series runs term by term across all entries (four per vector), so the independent
+    /// evaluations overlap instead of each waiting on its own chain of multiply-adds.</summary>
+    public static void ExpM1Near(ReadOnlySpan<double> x, Span<double> result)
+    {
+        var width = Vector256<double>.Count;
+        result[..x.Length].Fill(1.0 / 6402373705728000);
+        for (var k = 17; k >= 1; k--)
+        {
+            var c = Vector256.Create(InverseFactorial[k]);
+            for (var i = 0; i < x.Length; i += width)
+            {
+                ((Vector256.Create(result.Slice(i, width)) * Vector256.Create(x.Slice(i, width))) + c).CopyTo(result.Slice(i, width));
+            }
+        }
+
+        for (var i = 0; i < x.Length; i += width)
+        {
+            (Vector256.Create(result.Slice(i, width)) * Vector256.Create(x.Slice(i, width))).CopyTo(result.Slice(i, width));
+        }
     }
 
     /// <summary>log(1 + x) for x &gt; −1.</summary>

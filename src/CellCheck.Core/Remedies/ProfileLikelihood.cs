@@ -12,7 +12,8 @@ namespace CellCheck.Core.Remedies;
 /// refines it between the grid neighbours. λ̂ is determined to about √ε relative: ℓ is flat at its maximum, so no
 /// optimiser can place it more closely in double precision. The interval ends are the first crossings of the cut
 /// going outward from λ̂ (scanned on the grid, then located by Brent's root finder to 1e-12): when the
-/// region above the cut is not connected, the part holding λ̂ is reported.
+/// region above the cut is not connected, the part holding λ̂ is reported. Each distinct λ is evaluated once
+/// (<see cref="RememberedProfile"/>): the root searches start from grid points and λ̂, whose values are known.
 /// </remarks>
 internal static class ProfileLikelihood
 {
@@ -30,6 +31,7 @@ internal static class ProfileLikelihood
     public static (double Lambda, double Max, double? Lower, double? Upper) Maximise(Func<double, double> logLikelihood, double lower, double upper,
         double gridStep = GridStep)
     {
+        logLikelihood = new RememberedProfile(logLikelihood).At;
         var steps = (int)Math.Round((upper - lower) / gridStep);
         var grid = new double[steps + 1];
         var values = new double[steps + 1];

@@ -14,23 +14,26 @@ internal sealed record RemedyFits(double Shift, int NonPositive, double Min, dou
 {
     public static RemedyFits Compute(DesignData data, ModelSpec spec, CellPartition partition, ModelInfo fitted, ResponseColumn column, double shift, bool wantsYeoJohnson)
     {
-        var values = partition.Values.Values;
-        var y = new double[values.Length];
+        // y_i = origin + shift + value_i, read on demand: the blocked model's fits need no copy of the data
+        var y = new ShiftedValues(partition.Values.Values, column.Origin + shift);
         double min = double.NaN, max = double.NaN;
         var nonPositive = 0;
         for (var i = 0; i < y.Length; i++)
         {
-            y[i] = column.Origin + shift + values[i];
-            nonPositive += y[i] > 0 ? 0 : 1;
-            min = i == 0 ? y[i] : Math.Min(min, y[i]);
-            max = i == 0 ? y[i] : Math.Max(max, y[i]);
+            var v = y[i];
+            nonPositive += v > 0 ? 0 : 1;
+            min = i == 0 ? v : Math.Min(min, v);
+            max = i == 0 ? v : Math.Max(max, v);
         }
 
         var rss = y.Length == 0 ? null : RemedyAnalyzer.Model(data, spec, partition, fitted);
-        var degenerate = rss is null || rss.ResidualDf < 1 ? RemedyReason.NoResidualDf : rss.Of(y) == 0 ? RemedyReason.ZeroSpread : null;
+        double[]? copy = null;
+        double[] Copy() => copy ??= y.ToArray();
+        var degenerate = rss is null || rss.ResidualDf < 1 ? RemedyReason.NoResidualDf
+            : (rss is SettingRss settings ? settings.Of(y) : rss.Of(Copy())) == 0 ? RemedyReason.ZeroSpread : null;
         var boxCoxReason = degenerate ?? (nonPositive > 0 ? RemedyReason.NonPositiveValues : null);
-        var boxCox = boxCoxReason is null ? Remedies.BoxCox.Fit(rss!, y, fitted.Name, shift) : null;
-        var yeoJohnson = degenerate is null && (nonPositive > 0 || wantsYeoJohnson) ? Remedies.YeoJohnson.Fit(rss!, y, fitted.Name, shift) : null;
+        var boxCox = boxCoxReason is null ? (rss is SettingRss blocked ? Remedies.BoxCox.Fit(blocked, y, fitted.Name, shift) : Remedies.BoxCox.Fit(rss!, Copy(), fitted.Name, shift)) : null;
+        var yeoJohnson = degenerate is null && (nonPositive > 0 || wantsYeoJohnson) ? Remedies.YeoJohnson.Fit(rss!, Copy(), fitted.Name, shift) : null;
         return new RemedyFits(shift, nonPositive, min, max, degenerate, boxCoxReason, boxCox, yeoJohnson, wantsYeoJohnson);
     }
 

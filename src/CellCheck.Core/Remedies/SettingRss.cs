@@ -83,19 +83,17 @@ internal sealed class SettingRss : IResidualSumOfSquares
 
     public double Of(ReadOnlySpan<double> v)
     {
-        var groups = Starts.Length - 1;
-        var means = new double[groups];
         var total = 0.0;
-        for (var g = 0; g < groups; g++)
+        var means = new double[Starts.Length - 1];
+        for (var g = 0; g < means.Length; g++)
         {
-            var n = Starts[g + 1] - Starts[g];
             var sum = 0.0;
             for (var k = Starts[g]; k < Starts[g + 1]; k++)
             {
                 sum += v[Permutation[k]];
             }
 
-            means[g] = sum / n;
+            means[g] = sum / (Starts[g + 1] - Starts[g]);
             for (var k = Starts[g]; k < Starts[g + 1]; k++)
             {
                 var d = v[Permutation[k]] - means[g];
@@ -103,13 +101,43 @@ internal sealed class SettingRss : IResidualSumOfSquares
             }
         }
 
-        var residuals = new double[groups];
-        Between.Residualize(means, residuals);
-        for (var g = 0; g < groups; g++)
+        return PlusBetween(means, total);
+    }
+
+    /// <summary>The residual sum of squares of y read on demand: the same loops, and value, as for its copy.</summary>
+    public double Of(ShiftedValues y)
+    {
+        var total = 0.0;
+        var means = new double[Starts.Length - 1];
+        for (var g = 0; g < means.Length; g++)
         {
-            total += (Starts[g + 1] - Starts[g]) * residuals[g] * residuals[g];
+            var sum = 0.0;
+            for (var k = Starts[g]; k < Starts[g + 1]; k++)
+            {
+                sum += y[Permutation[k]];
+            }
+
+            means[g] = sum / (Starts[g + 1] - Starts[g]);
+            for (var k = Starts[g]; k < Starts[g + 1]; k++)
+            {
+                var d = y[Permutation[k]] - means[g];
+                total += d * d;
+            }
         }
 
-        return total;
+        return PlusBetween(means, total);
+    }
+
+    /// <summary><paramref name="within"/> plus the weighted residual sum of squares of the setting means on the model.</summary>
+    private double PlusBetween(double[] means, double within)
+    {
+        var residuals = new double[means.Length];
+        Between.Residualize(means, residuals);
+        for (var g = 0; g < means.Length; g++)
+        {
+            within += (Starts[g + 1] - Starts[g]) * residuals[g] * residuals[g];
+        }
+
+        return within;
     }
 }

@@ -51,4 +51,97 @@ public sealed class GroupedPowerSumsTests
         Assert.Equal(BoxCox.LogLikelihood(rss, logs, 0), sums.LogLikelihood(0), Math.Abs(BoxCox.LogLikelihood(rss, logs, 0)) * 1e-11);
         Assert.Equal(BoxCox.LogLikelihood(rss, logs, 1e-9), sums.LogLikelihood(1e-9), Math.Abs(BoxCox.LogLikelihood(rss, logs, 1e-9)) * 1e-11);
     }
+
+    /// <summary>Many groups of 0 to 9 rows (a count that is not a multiple of the block width, over several parallel
+    /// ranges), group levels far apart so that the shifts take both routes of expm1.</summary>
+    private static (int[] Starts, double[] Logs) ManyGroups(double logSpread, int seed)
+    {
+        var random = new Random(seed);
+        var starts = new int[5003 + 1];
+        for (var g = 0; g < starts.Length - 1; g++)
+        {
+            starts[g + 1] = starts[g] + random.Next(10);
+        }
+
+        var logs = new double[starts[^1]];
+        for (var g = 0; g < starts.Length - 1; g++)
+        {
+            var level = 3 * random.NextDouble();
+            for (var i = starts[g]; i < starts[g + 1]; i++)
+            {
+                logs[i] = level + (logSpread * ((2 * random.NextDouble()) - 1));
+            }
+        }
+
+        return (starts, logs);
+    }
+
+    [Theory]
+    [InlineData(0.01)]
+    [InlineData(0.3)]
+    [InlineData(0.9)] // wider than the series' reach at the ends of the range: the row-by-row route in some lanes
+    public void The_vectorised_profile_equals_the_plain_one_group_at_a_time_profile_bit_for_bit(double logSpread)
+    {
+        var (starts, logs) = ManyGroups(logSpread, seed: 5);
+        var sums = new GroupedPowerSums(starts, logs);
+        var plain = new PlainGroupedProfile(starts, logs);
+        foreach (var lambda in new[] { -5, -3.7, -1, -1e-9, 0, -0.0, 1e-9, 0.25, 0.97251828, 1, 2.5, 5 })
+        {
+            Assert.Equal(plain.LogLikelihood(lambda), sums.LogLikelihood(lambda));
+        }
+    }
+
+    [Theory]
+    [InlineData(0.01)]
+    [InlineData(0.9)]
+    public void The_power_sums_of_each_group_equal_the_plain_row_by_row_loop_bit_for_bit(double logSpread)
+    {
+        var (starts, logs) = ManyGroups(logSpread, seed: 9);
+        var table = new PowerSumTable(starts, logs);
+        for (var g = 0; g < table.Groups; g++)
+        {
+            var cell = logs.AsSpan(starts[g], starts[g + 1] - starts[g]);
+            var centre = cell.IsEmpty ? 0 : Core.Statistics.Descriptive.Mean(cell);
+            var terms = cell.IsEmpty ? 0 : GroupedPowerSums.TermsWithin(cell.Length, cell.ToArray().Max(l => Math.Abs(l - centre)));
+            Assert.Equal(centre, table.Centre[g]);
+            Assert.Equal(terms, table.Terms[g]);
+            var expected = new double[terms + 1];
+            foreach (var l in cell)
+            {
+                var e = l - centre;
+                var power = e;
+                for (var k = 1; k <= terms; k++)
+                {
+                    expected[k] += power;
+                    power *= e;
+                }
+            }
+
+            var factorial = 1.0;
+            for (var k = 1; k <= terms; k++)
+            {
+                factorial *= k;
+                var offset = table.Offsets[g / PowerSumTable.Lanes] + (g % PowerSumTable.Lanes);
+                Assert.Equal(expected[k] / factorial, table.Sums[offset + ((k - 1) * PowerSumTable.Lanes)]);
+            }
+        }
+    }
+
+    [Fact]
+    public void The_vector_expm1_series_equals_the_scalar_one_bit_for_bit()
+    {
+        var random = new Random(8);
+        var x = Enumerable.Range(0, 64).Select(k => k < 4 ? new[] { 0, -0.0, 1e-300, -0.4999999 }[k] : random.NextDouble() - 0.5).ToArray();
+        var actual = new double[x.Length];
+        PreciseMath.ExpM1Near(x, actual);
+        for (var i = 0; i < x.Length; i++)
+        {
+            Assert.Equal(PreciseMath.ExpM1(x[i]), actual[i]);
+        }
+
+        foreach (var v in new[] { 0.5, -0.7, 3, -40, 700, 1e-20 })
+        {
+            Assert.Equal(PreciseMath.ExpM1(v), PreciseMath.ExpM1(v, Math.Exp(v)));
+        }
+    }
 }

@@ -40,4 +40,21 @@ public sealed class ProfileLikelihoodTests
         Assert.Null(upper);
         Close.Absolute(5 - (3.841458820694124 / 2), lower!.Value, 1e-9);
     }
+
+    [Fact]
+    public void The_search_evaluates_each_point_once_and_finds_what_it_finds_without_remembering()
+    {
+        static double Profile(double l) => 7 - ((l - 0.3) * (l - 0.3)) + (0.01 * Math.Sin(9 * l));
+        var calls = new List<double>();
+        var remembered = ProfileLikelihood.Maximise(l => { calls.Add(l); return Profile(l); }, -5, 5, ProfileLikelihood.CoarseStep);
+        Assert.Equal(calls.Count, calls.Distinct().Count());
+
+        // the same search with a function that has no memory of its own gives the same doubles
+        var profile = new RememberedProfile(Profile);
+        Assert.Equal(Profile(0.7), profile.At(0.7));
+        Assert.Equal(Profile(0.7), profile.At(0.7));
+        Assert.Equal(1, profile.Evaluations);
+        Assert.Equal(remembered, ProfileLikelihood.Maximise(Profile, -5, 5, ProfileLikelihood.CoarseStep));
+    }
 }
+

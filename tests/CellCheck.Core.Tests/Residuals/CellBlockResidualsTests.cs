@@ -141,6 +141,22 @@ public sealed class CellBlockResidualsTests
         Assert.Equal(expected.P, actual.P, 1e-9);
     }
 
+    [Theory]
+    [InlineData(1)]
+    [InlineData(2)]
+    public void The_Box_Cox_profile_by_settings_equals_the_plain_one_group_at_a_time_profile_bit_for_bit(int blockFactors)
+    {
+        var (partition, blocks, _, _) = Design(7, blockFactors);
+        var settings = SettingRss.Build(partition, blocks)!;
+        var logs = Array.ConvertAll(settings.Permutation, i => Math.Log(partition.Values.Values[i]));
+        var sums = new GroupedPowerSums(settings.Starts, logs, settings.Between);
+        var plain = new Remedies.PlainGroupedProfile(settings.Starts, logs, settings.Between);
+        foreach (var lambda in new[] { -5, -2.0, -0.5, 0.0, 1e-9, 0.3, 1.0, 2.5, 5 })
+        {
+            Assert.Equal(plain.LogLikelihood(lambda), sums.LogLikelihood(lambda));
+        }
+    }
+
     [Fact]
     public void The_Box_Cox_profile_by_settings_equals_the_dense_profile()
     {

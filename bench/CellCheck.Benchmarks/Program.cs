@@ -18,6 +18,7 @@ internal static class Program
 {
     private static int Main(string[] args)
     {
+        IO.Platform.HeapPages.Advise(); // as the tool does
         switch (args.FirstOrDefault())
         {
             case "generate" when args.Length == 4:

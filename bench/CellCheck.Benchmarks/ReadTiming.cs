@@ -39,7 +39,7 @@ internal static class ReadTiming
         var kept = step();
         var wall = clock.Elapsed.TotalSeconds;
         var used = (Process.GetCurrentProcess().TotalProcessorTime - cpu).TotalSeconds;
-        Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{what,-18} {wall,7:F3} s  (CPU {used,6:F2} s)"));
+        Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{what,-18} {wall,7:F3} s  (CPU {used,6:F2} s, collections {GC.CollectionCount(0)}/{GC.CollectionCount(1)}/{GC.CollectionCount(2)}, pauses {GC.GetTotalPauseDuration().TotalSeconds:F2} s)"));
         GC.KeepAlive(kept);
     }
 }

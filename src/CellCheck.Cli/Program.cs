@@ -6,7 +6,7 @@ internal static class Program
 {
     private static int Main(string[] args)
     {
-        HeapPages.Advise();
+        IO.Platform.HeapPages.Advise();
         return Run(args, Console.Out, Console.Error);
     }
 

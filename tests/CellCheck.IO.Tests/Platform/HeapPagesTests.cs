@@ -1,6 +1,8 @@
 using System.Runtime.InteropServices;
 
-namespace CellCheck.Cli.Tests;
+using CellCheck.IO.Platform;
+
+namespace CellCheck.IO.Tests.Platform;
 
 public sealed class HeapPagesTests
 {

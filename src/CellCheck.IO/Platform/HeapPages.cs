@@ -1,7 +1,7 @@
 using System.Globalization;
 using System.Runtime.InteropServices;
 
-namespace CellCheck.Cli;
+namespace CellCheck.IO.Platform;
 
 /// <summary>
 /// Asks Linux to back the managed heap with transparent huge pages (2 MB) where the system leaves that to each program
@@ -10,7 +10,7 @@ namespace CellCheck.Cli;
 /// one address range at start-up: the range holding a fresh array, with the anonymous mappings joined to it on both
 /// sides, is advised with <c>MADV_HUGEPAGE</c>. Advice only: where it is refused or not Linux nothing changes.
 /// </summary>
-internal static partial class HeapPages
+public static partial class HeapPages
 {
     private const int MadviseHugePage = 14;
 

@@ -19,7 +19,7 @@ public static class DataReader
     public const long ConcurrentScanBytes = 8 << 20;
 
     /// <summary>Delimited files above this size without quotes are read in two ranges on two threads (<see cref="SplitReader"/>).</summary>
-    internal const long SplitBytes = 32 << 20;
+    internal const long SplitBytes = 8 << 20;
 
     public static LoadResult<DesignData> Read(DesignFile design) => Read(design, SplitBytes);
 

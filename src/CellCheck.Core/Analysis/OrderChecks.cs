@@ -33,12 +33,12 @@ internal static class OrderChecks
 
         var t = new double[use.Length];
         var e = new double[use.Length];
-        var byRow = RunOrderColumns.ByRow(partition, residuals.Residuals, order.Length);
+        var grouped = residuals.Residuals;
         var ties = 0;
         for (var k = 0; k < use.Length; k++)
         {
             t[k] = order[rows[k]];
-            e[k] = byRow[rows[k]];
+            e[k] = grouped[use[k]];
             ties += k > 0 && t[k] == t[k - 1] ? 1 : 0;
         }
 

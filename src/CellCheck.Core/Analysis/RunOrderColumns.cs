@@ -2,23 +2,11 @@ using CellCheck.Core.Cells;
 
 namespace CellCheck.Core.Analysis;
 
-/// <summary>Grouped-order columns brought into run order for the order checks: written out by data row first
-/// (reads in order, writes scattered), then read by the rows in run order, sequentially when the file is in run order.</summary>
+/// <summary>The cells of the used rows brought into run order for the order checks: written out by data row first
+/// (reads in order, writes scattered), then read by the rows in run order, sequentially when the file is in run order.
+/// (The residuals are read straight from their grouped positions: one scattered read a row, without a row-ordered copy.)</summary>
 internal static class RunOrderColumns
 {
-    /// <summary>A grouped-order column written out by data row (reads in order, writes scattered: cheaper than gathering).</summary>
-    internal static double[] ByRow(CellPartition partition, double[] grouped, int rows)
-    {
-        var result = new double[rows];
-        var order = partition.RowOrder;
-        for (var i = 0; i < order.Length; i++)
-        {
-            result[order[i]] = grouped[i];
-        }
-
-        return result;
-    }
-
     /// <summary>The cell of each used row, in run order.</summary>
     internal static int[] CellsInRunOrder(CellPartition partition, int[] rows, int rowCount)
     {

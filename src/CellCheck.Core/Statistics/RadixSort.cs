@@ -1,3 +1,5 @@
+using System.Runtime.InteropServices;
+
 namespace CellCheck.Core.Statistics;
 
 /// <summary>
@@ -33,18 +35,26 @@ internal static class RadixSort
             return;
         }
 
-        var keys = new ulong[values.Length];
-        var spare = new ulong[values.Length];
+        // the keys are written over the values themselves (each read before it is overwritten): one spare buffer only
+        var keys = MemoryMarshal.Cast<double, ulong>(values);
+        for (var i = 0; i < values.Length; i++)
+        {
+            keys[i] = Key(values[i]);
+        }
+
+        var spare = GC.AllocateUninitializedArray<ulong>(values.Length);
+        if (Passes(keys, spare, [], [], values.Length))
         {
             for (var i = 0; i < values.Length; i++)
             {
-                keys[i] = Key(values[i]);
+                values[i] = Value(spare[i]);
             }
-
-            var sorted = Passes(keys, spare, null, null, values.Length) ? spare : keys;
+        }
+        else
+        {
             for (var i = 0; i < values.Length; i++)
             {
-                values[i] = Value(sorted[i]);
+                values[i] = Value(keys[i]);
             }
         }
     }
@@ -153,7 +163,8 @@ internal static class RadixSort
     private const int Passes64 = (64 + DigitBits - 1) / DigitBits;
 
     /// <summary>Runs the passes between the two buffers; true when the result ended in the spare buffers.</summary>
-    private static bool Passes(ulong[] keys, ulong[] spare, int[]? payload, int[]? carried, int n)
+    /// <param name="payload">Values carried with the keys (empty for none), with <paramref name="carried"/> their spare buffer.</param>
+    private static bool Passes(Span<ulong> keys, Span<ulong> spare, Span<int> payload, Span<int> carried, int n)
     {
         const int buckets = 1 << DigitBits;
         const ulong mask = buckets - 1;
@@ -188,14 +199,18 @@ internal static class RadixSort
             {
                 var at = offsets[(int)((keys[i] >> shift) & mask)]++;
                 spare[at] = keys[i];
-                if (payload is not null)
+                if (!payload.IsEmpty)
                 {
-                    carried![at] = payload[i];
+                    carried[at] = payload[i];
                 }
             }
 
-            (keys, spare) = (spare, keys);
-            (payload, carried) = (carried, payload);
+            var written = spare;
+            spare = keys;
+            keys = written;
+            var moved = carried;
+            carried = payload;
+            payload = moved;
             swapped = !swapped;
         }
 

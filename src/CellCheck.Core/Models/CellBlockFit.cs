@@ -137,7 +137,8 @@ internal sealed class CellBlockFit
         return eigen.Min() > 1e-9 * Math.Max(1.0, eigen.Max());
     }
 
-    /// <summary>Residuals of <paramref name="y"/> (one value per unit, in unit order) on cells plus blocks.</summary>
+    /// <summary>Residuals of <paramref name="y"/> (one value per unit, in unit order) on cells plus blocks;
+    /// <paramref name="residuals"/> may be <paramref name="y"/> itself (every sum is formed before the first residual is written).</summary>
     public void Residualize(ReadOnlySpan<double> y, Span<double> residuals)
     {
         var cells = starts.Length - 1;

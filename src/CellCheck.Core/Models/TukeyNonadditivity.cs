@@ -21,8 +21,9 @@ public static class TukeyNonadditivity
         }
 
         var squared = fit.Fitted.Select(v => v * v).ToArray();
+        var scale = SumOfSquares(squared);
         var z = LinearFit.Fit(estimableDesign, squared).Residuals;
-        return FromProjection(fit.Residuals, squared, z, fit.ResidualSumOfSquares, fit.ResidualDf);
+        return FromProjection(fit.Residuals, z, scale, fit.ResidualSumOfSquares, fit.ResidualDf);
     }
 
     /// <summary>The same test for a fit given by its residualizing map (the absorbed cells-plus-blocks fit), with the
@@ -41,21 +42,31 @@ public static class TukeyNonadditivity
             squared[i] = fitted * fitted;
         }
 
-        var z = new double[squared.Length];
-        fit.Residualize(squared, z);
-        return FromProjection(residuals, squared, z, rss, residualDf);
+        var scale = SumOfSquares(squared);
+        fit.Residualize(squared, squared); // in place: the map reads all its sums before it writes
+        return FromProjection(residuals, squared, scale, rss, residualDf);
     }
 
-    private static TestOutcome FromProjection(double[] residuals, double[] squared, double[] z, double rss, int residualDf)
+    private static double SumOfSquares(double[] values)
+    {
+        var sum = 0.0;
+        foreach (var v in values)
+        {
+            sum += v * v;
+        }
+
+        return sum;
+    }
+
+    /// <param name="scale">Σ (ŷ²)², the size of the squared fitted values before projection.</param>
+    private static TestOutcome FromProjection(double[] residuals, double[] z, double scale, double rss, int residualDf)
     {
         var ez = 0.0;
         var zz = 0.0;
-        var scale = 0.0;
         for (var i = 0; i < z.Length; i++)
         {
             ez += residuals[i] * z[i];
             zz += z[i] * z[i];
-            scale += squared[i] * squared[i];
         }
 
         if (!(zz > 1e-20 * scale) || !(rss > 0))

@@ -95,6 +95,18 @@ public sealed class CellBlockResidualsTests
     }
 
     [Fact]
+    public void The_absorbed_fit_residualizes_in_place_to_the_same_values()
+    {
+        var (partition, blocks, spec, _) = Design(6, 2);
+        var fit = new CellBlockResiduals(blocks, spec, "m", new ModelResiduals(blocks, spec, "m")).Compute(partition).Diagnostics!.Absorbed!;
+        var y = partition.Values.Values.Select(v => (v * v) - 3).ToArray();
+        var apart = new double[y.Length];
+        fit.Residualize(y, apart);
+        fit.Residualize(y, y);
+        Assert.Equal(apart, y);
+    }
+
+    [Fact]
     public void Tukeys_test_and_lack_of_fit_equal_the_dense_fit()
     {
         var (partition, blocks, spec, _) = Design(3, 1);

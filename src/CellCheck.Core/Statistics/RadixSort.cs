@@ -43,7 +43,7 @@ internal static class RadixSort
         }
 
         var spare = GC.AllocateUninitializedArray<ulong>(values.Length);
-        if (Passes(keys, spare, [], [], values.Length))
+        if (RadixPasses.Run(keys, spare, [], [], values.Length))
         {
             for (var i = 0; i < values.Length; i++)
             {
@@ -83,7 +83,7 @@ internal static class RadixSort
             }
 
             payload.CopyTo(source);
-            var inSpare = Passes(keys, spare, source, carried, values.Length);
+            var inSpare = RadixPasses.Run(keys, spare, source, carried, values.Length);
             var (sortedKeys, sortedPayload) = inSpare ? (spare, carried) : (keys, source);
             for (var i = 0; i < values.Length; i++)
             {
@@ -130,7 +130,7 @@ internal static class RadixSort
 
         var spare = GC.AllocateUninitializedArray<ulong>(n);
         var carried = GC.AllocateUninitializedArray<int>(n);
-        if (Passes(keys, spare, order, carried, n))
+        if (RadixPasses.Run(keys, spare, order, carried, n))
         {
             order = carried;
             free = keys;
@@ -155,65 +155,4 @@ internal static class RadixSort
 
     private static double Value(ulong key) =>
         BitConverter.Int64BitsToDouble((long)((key & 0x8000_0000_0000_0000UL) != 0 ? key & 0x7FFF_FFFF_FFFF_FFFFUL : ~key));
-
-    /// <summary>Bits per digit: 2048 buckets keep every pass's scatter targets within the cache (16-bit digits, with
-    /// 65 536 targets, spent most of their time in cache and TLB misses).</summary>
-    private const int DigitBits = 11;
-
-    private const int Passes64 = (64 + DigitBits - 1) / DigitBits;
-
-    /// <summary>Runs the passes between the two buffers; true when the result ended in the spare buffers.</summary>
-    /// <param name="payload">Values carried with the keys (empty for none), with <paramref name="carried"/> their spare buffer.</param>
-    private static bool Passes(Span<ulong> keys, Span<ulong> spare, Span<int> payload, Span<int> carried, int n)
-    {
-        const int buckets = 1 << DigitBits;
-        const ulong mask = buckets - 1;
-        // every pass's histogram from one read of the keys
-        var counts = new int[Passes64 * buckets];
-        for (var i = 0; i < n; i++)
-        {
-            var key = keys[i];
-            for (var pass = 0; pass < Passes64; pass++)
-            {
-                counts[(pass * buckets) + (int)((key >> (pass * DigitBits)) & mask)]++;
-            }
-        }
-
-        var swapped = false;
-        for (var pass = 0; pass < Passes64; pass++)
-        {
-            var shift = pass * DigitBits;
-            var offsets = counts.AsSpan(pass * buckets, buckets);
-            if (offsets[(int)((keys[0] >> shift) & mask)] == n)
-            {
-                continue; // every key has this digit
-            }
-
-            var total = 0;
-            for (var d = 0; d < buckets; d++)
-            {
-                (offsets[d], total) = (total, total + offsets[d]);
-            }
-
-            for (var i = 0; i < n; i++)
-            {
-                var at = offsets[(int)((keys[i] >> shift) & mask)]++;
-                spare[at] = keys[i];
-                if (!payload.IsEmpty)
-                {
-                    carried[at] = payload[i];
-                }
-            }
-
-            var written = spare;
-            spare = keys;
-            keys = written;
-            var moved = carried;
-            carried = payload;
-            payload = moved;
-            swapped = !swapped;
-        }
-
-        return swapped;
-    }
 }

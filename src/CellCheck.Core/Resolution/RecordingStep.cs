@@ -38,30 +38,42 @@ public static class RecordingStep
             step = exact && divisor > 0 ? divisor * unit : null;
         }
 
-        var tied = 0;
+        var tied = TiedValues(cells);
+        var tiedShare = cells.Count == 0 ? 0 : (double)tied / cells.Count;
+        double? ratio = step is { } s && residualSd > 0 ? s / residualSd : null;
+        var coarse = (ratio ?? 0) >= ResolutionSummary.CoarseStepToSd || tiedShare >= ResolutionSummary.CoarseTiedShare;
+        return new ResolutionSummary(step, tiedShare, ratio, coarse);
+    }
+
+    /// <summary>Values equal to another value of their cell: each cell sorted in a scratch row of its thread, cells side
+    /// by side on large data (a count, so the order of the cells does not matter).</summary>
+    private static int TiedValues(GroupedValues cells)
+    {
         var largest = 0;
         for (var c = 0; c < cells.GroupCount; c++)
         {
             largest = Math.Max(largest, cells.Size(c));
         }
 
-        var scratch = new double[largest]; // one cell at a time
-        for (var c = 0; c < cells.GroupCount; c++)
+        var tied = 0;
+        var options = new ParallelOptions { MaxDegreeOfParallelism = cells.Count > ParallelValues ? -1 : 1 };
+        Parallel.For(0, cells.GroupCount, options, () => (Scratch: new double[largest], Tied: 0), (c, _, local) =>
         {
-            var y = scratch.AsSpan(0, cells.Size(c));
+            var y = local.Scratch.AsSpan(0, cells.Size(c));
             cells.Group(c).CopyTo(y);
             y.Sort();
             for (var i = 1; i < y.Length; i++)
             {
-                tied += y[i] == y[i - 1] ? 1 : 0;
+                local.Tied += y[i] == y[i - 1] ? 1 : 0;
             }
-        }
 
-        var tiedShare = cells.Count == 0 ? 0 : (double)tied / cells.Count;
-        double? ratio = step is { } s && residualSd > 0 ? s / residualSd : null;
-        var coarse = (ratio ?? 0) >= ResolutionSummary.CoarseStepToSd || tiedShare >= ResolutionSummary.CoarseTiedShare;
-        return new ResolutionSummary(step, tiedShare, ratio, coarse);
+            return local;
+        }, local => Interlocked.Add(ref tied, local.Tied));
+        return tied;
     }
+
+    /// <summary>Above this many values the cells are sorted side by side.</summary>
+    private const int ParallelValues = 100_000;
 
     private static long Gcd(long a, long b)
     {

@@ -49,7 +49,7 @@ internal static class PooledChecks
         CheckResult[] checks =
         [
             CheckResults.From(CheckNames.ShapiroWilk, shapiroWilk, alpha),
-            CheckResults.From(CheckNames.AndersonDarling, AndersonDarling.TestSortedInPlace(span), alpha), // last: it overwrites the copy
+            CheckResults.From(CheckNames.AndersonDarling, AndersonDarling.TestSortedInPlace(values, span.Length), alpha), // last: it overwrites the copy
             CheckResults.From(CheckNames.DagostinoPearson, dagostino, alpha),
         ];
         return new PooledResult(residuals.Model, span.Length, residuals.ResidualDf, residuals.ResidualSd, moments.Skewness, moments.ExcessKurtosis, checks, notes);

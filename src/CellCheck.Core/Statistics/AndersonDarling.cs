@@ -93,7 +93,13 @@ public static class AndersonDarling
 
     /// <summary>As <see cref="Test"/> for finite values already in ascending order, which it overwrites (rescaled and
     /// centred): for a caller that holds a sorted copy it no longer needs, such as the pooled checks on millions of values.</summary>
-    internal static TestOutcome TestSortedInPlace(Span<double> sorted)
+    internal static TestOutcome TestSortedInPlace(Span<double> sorted) => TestSortedInPlace(sorted, null);
+
+    /// <summary>As <see cref="TestSortedInPlace(Span{double})"/> on the first <paramref name="length"/> values of an
+    /// array, whose terms on a long sample are then computed side by side (<see cref="AndersonDarlingSum"/>).</summary>
+    internal static TestOutcome TestSortedInPlace(double[] sorted, int length) => TestSortedInPlace(sorted.AsSpan(0, length), sorted);
+
+    private static TestOutcome TestSortedInPlace(Span<double> sorted, double[]? array)
     {
         if (sorted.Length < 8)
         {
@@ -115,59 +121,7 @@ public static class AndersonDarling
             sorted[i] = (sorted[i] * scale) - origin;
         }
 
-        var a2 = Statistic(sorted);
+        var a2 = array is not null ? AndersonDarlingSum.Statistic(array, sorted.Length) : AndersonDarlingSum.Statistic(sorted);
         return new TestOutcome(a2, PValue(ModifiedStatistic(a2, sorted.Length)));
-    }
-
-    private static double Statistic(ReadOnlySpan<double> x)
-    {
-        var n = x.Length;
-        var (mean, sd) = MeanAndSd(x);
-        var sum = default(NeumaierSum);
-        // terms i and n − 1 − i together: each value's two log tails come from one erfc
-        for (var i = 0; i <= (n - 1) / 2; i++)
-        {
-            var j = n - 1 - i;
-            var (lowerI, upperI) = StandardNormal.LogCdfBoth((x[i] - mean) / sd);
-            var (lowerJ, upperJ) = j == i ? (lowerI, upperI) : StandardNormal.LogCdfBoth((x[j] - mean) / sd);
-            sum.Add(((2.0 * i) + 1.0) * (lowerI + upperJ));
-            if (j != i)
-            {
-                sum.Add(((2.0 * j) + 1.0) * (lowerJ + upperI));
-            }
-        }
-
-        return -n - (sum.Value / n);
-    }
-
-    /// <summary>
-    /// The mean (compensated sum, refined by the compensated mean of the deviations) and the n − 1 standard deviation
-    /// (compensated sum of squares about it). A² is ill-conditioned in both at large n on data far from normal: at
-    /// n = 10⁶ and A² ≈ 105 an error of 1e-15 SD in the mean moves A² by about 1e-11 of itself, and Stephens' p by
-    /// about 200 times as much.
-    /// </summary>
-    private static (double Mean, double Sd) MeanAndSd(ReadOnlySpan<double> x)
-    {
-        var total = default(NeumaierSum);
-        foreach (var v in x)
-        {
-            total.Add(v);
-        }
-
-        var first = total.Value / x.Length;
-        var drift = default(NeumaierSum);
-        foreach (var v in x)
-        {
-            drift.Add(v - first);
-        }
-
-        var mean = first + (drift.Value / x.Length);
-        var squares = default(NeumaierSum);
-        foreach (var v in x)
-        {
-            squares.Add((v - mean) * (v - mean));
-        }
-
-        return (mean, Math.Sqrt(squares.Value / (x.Length - 1)));
     }
 }

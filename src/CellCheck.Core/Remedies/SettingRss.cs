@@ -81,7 +81,13 @@ internal sealed class SettingRss : IResidualSumOfSquares
         return between is null ? null : new SettingRss(permutation, starts, between, settings.Length - between.Rank);
     }
 
-    public double Of(ReadOnlySpan<double> v)
+    public double Of(ReadOnlySpan<double> v) => Of(new SpanValues(v));
+
+    /// <summary>The residual sum of squares of y read on demand: the same loops, and value, as for its copy.</summary>
+    public double Of(ShiftedValues y) => Of<ShiftedValues>(y);
+
+    private double Of<TValues>(TValues v)
+        where TValues : IIndexedValues, allows ref struct
     {
         var total = 0.0;
         var means = new double[Starts.Length - 1];
@@ -97,30 +103,6 @@ internal sealed class SettingRss : IResidualSumOfSquares
             for (var k = Starts[g]; k < Starts[g + 1]; k++)
             {
                 var d = v[Permutation[k]] - means[g];
-                total += d * d;
-            }
-        }
-
-        return PlusBetween(means, total);
-    }
-
-    /// <summary>The residual sum of squares of y read on demand: the same loops, and value, as for its copy.</summary>
-    public double Of(ShiftedValues y)
-    {
-        var total = 0.0;
-        var means = new double[Starts.Length - 1];
-        for (var g = 0; g < means.Length; g++)
-        {
-            var sum = 0.0;
-            for (var k = Starts[g]; k < Starts[g + 1]; k++)
-            {
-                sum += y[Permutation[k]];
-            }
-
-            means[g] = sum / (Starts[g + 1] - Starts[g]);
-            for (var k = Starts[g]; k < Starts[g + 1]; k++)
-            {
-                var d = y[Permutation[k]] - means[g];
                 total += d * d;
             }
         }

@@ -4,7 +4,7 @@ namespace CellCheck.Core.Remedies;
 /// The response on the scale a transformation sees, y_i = Offset + Values[i] (offset = the column's origin plus the
 /// shift), read on demand instead of copied: the same doubles as the copy, without a second array of the data's length.
 /// </summary>
-internal readonly struct ShiftedValues(double[] values, double offset)
+internal readonly struct ShiftedValues(double[] values, double offset) : IIndexedValues
 {
     public int Length => values.Length;
 

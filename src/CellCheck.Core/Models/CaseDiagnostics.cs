@@ -7,22 +7,6 @@ namespace CellCheck.Core.Models;
 /// </summary>
 internal static class CaseDiagnostics
 {
-    /// <summary>Rows per parallel work item of <see cref="ComputeInParallel"/>.</summary>
-    private const int Chunk = 1 << 18;
-
-    /// <summary>As <see cref="Compute"/>, over chunks of rows side by side (each row's values depend on that row only);
-    /// a null array is skipped.</summary>
-    public static void ComputeInParallel(double[] e, double[] h, double rss, int df, int rank, double[]? internalT, double[]? externalT, double[]? cooks)
-    {
-        Parallel.For(0, (e.Length + Chunk - 1) / Chunk, k =>
-        {
-            var from = k * Chunk;
-            var length = Math.Min(Chunk, e.Length - from);
-            Compute(e.AsSpan(from, length), h.AsSpan(from, length), rss, df, rank,
-                Part(internalT, from, length), Part(externalT, from, length), Part(cooks, from, length));
-        });
-    }
-
     /// <summary>Fills the three arrays (an empty one is skipped); rows whose leverage is exactly 1 get NaN in each.</summary>
     public static void Compute(ReadOnlySpan<double> e, ReadOnlySpan<double> h, double rss, int df, int rank,
         Span<double> internalT, Span<double> externalT, Span<double> cooks)
@@ -59,8 +43,6 @@ internal static class CaseDiagnostics
             externalT[i] = e[i] / (Math.Sqrt(deletedSs / (df - 1)) * Math.Sqrt(oneMinusH));
         }
     }
-
-    private static Span<double> Part(double[]? values, int from, int length) => values is null ? [] : values.AsSpan(from, length);
 
     private static void Set(Span<double> target, bool write, int i, double value)
     {

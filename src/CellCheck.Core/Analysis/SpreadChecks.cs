@@ -44,9 +44,8 @@ internal static class SpreadChecks
             notes.Add($"{singletons} cell(s) with a single value take no part in the spread tests.");
         }
 
-        // the five tests from one visit of each cell (cells side by side), then the working copies released on large data
+        // the five tests from one visit of each cell (cells side by side); the caller releases the working copies
         var outcomes = SpreadKernel.Run(grouped, SpreadTests.All);
-        WorkingMemory.Release(grouped.Count);
         CheckResult[] checks =
         [
             CheckResults.From(CheckNames.Levene, outcomes.Levene!, alpha),

@@ -11,23 +11,25 @@ namespace CellCheck.Core.Residuals;
 /// formed on first use (only per-row output keeps them), so a large check that writes none never holds them.</remarks>
 public sealed record ResidualDiagnostics
 {
-    private readonly Lazy<double[]> leverage;
-    private readonly Func<double[]> externalSource;
-    private readonly Lazy<double[]> studentizedExternal;
-    private readonly Lazy<double[]> cooksDistance;
+    private readonly OnDemandColumn leverage;
+    private readonly OnDemandColumn studentizedExternal;
+    private readonly OnDemandColumn cooksDistance;
 
     public ResidualDiagnostics(double[] leverage, double[] studentizedExternal, double[] cooksDistance, ModelInfo model)
-        : this(() => leverage, () => studentizedExternal, () => cooksDistance, model)
+        : this(new OnDemandColumn(leverage), new OnDemandColumn(studentizedExternal), new OnDemandColumn(cooksDistance), model)
     {
-        _ = StudentizedExternal; // given, so kept: a reader for one use must not get it as its own
     }
 
     public ResidualDiagnostics(Func<double[]> leverage, Func<double[]> studentizedExternal, Func<double[]> cooksDistance, ModelInfo model)
+        : this(new OnDemandColumn(leverage), new OnDemandColumn(studentizedExternal), new OnDemandColumn(cooksDistance), model)
     {
-        this.leverage = new Lazy<double[]>(leverage);
-        externalSource = studentizedExternal;
-        this.studentizedExternal = new Lazy<double[]>(studentizedExternal);
-        this.cooksDistance = new Lazy<double[]>(cooksDistance);
+    }
+
+    private ResidualDiagnostics(OnDemandColumn leverage, OnDemandColumn studentizedExternal, OnDemandColumn cooksDistance, ModelInfo model)
+    {
+        this.leverage = leverage;
+        this.studentizedExternal = studentizedExternal;
+        this.cooksDistance = cooksDistance;
         Model = model;
     }
 
@@ -78,5 +80,5 @@ public sealed record ResidualDiagnostics
 
     /// <summary>The externally studentized residuals for one reading: those kept if already formed, else a fresh
     /// copy that is not kept (the outlier screen reads them once; per-row output keeps them).</summary>
-    internal double[] StudentizedExternalOnce() => studentizedExternal.IsValueCreated ? studentizedExternal.Value : externalSource();
+    internal double[] StudentizedExternalOnce() => studentizedExternal.Once(out _);
 }

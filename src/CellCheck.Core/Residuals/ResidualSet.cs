@@ -15,25 +15,28 @@ namespace CellCheck.Core.Residuals;
 /// use, so a large check that writes no per-row output never holds them.</remarks>
 public sealed record ResidualSet
 {
-    private readonly Lazy<double[]> fitted;
-    private readonly Func<double[]> studentizedSource;
-    private readonly Lazy<double[]> studentized;
+    private readonly OnDemandColumn fitted;
+    private readonly OnDemandColumn studentized;
 
     public ResidualSet(string model, double[] residuals, double[] fitted, double[] studentized, double residualSd, int residualDf,
         INullPlan nullPlan, bool withinCellShift = false)
-        : this(model, residuals, () => fitted, () => studentized, residualSd, residualDf, nullPlan, withinCellShift)
+        : this(model, residuals, new OnDemandColumn(fitted), new OnDemandColumn(studentized), residualSd, residualDf, nullPlan, withinCellShift)
     {
-        _ = Studentized; // given, so kept: a reader for one use must not get it as its own
     }
 
     public ResidualSet(string model, double[] residuals, Func<double[]> fitted, Func<double[]> studentized, double residualSd, int residualDf,
         INullPlan nullPlan, bool withinCellShift = false)
+        : this(model, residuals, new OnDemandColumn(fitted), new OnDemandColumn(studentized), residualSd, residualDf, nullPlan, withinCellShift)
+    {
+    }
+
+    private ResidualSet(string model, double[] residuals, OnDemandColumn fitted, OnDemandColumn studentized, double residualSd, int residualDf,
+        INullPlan nullPlan, bool withinCellShift)
     {
         Model = model;
         Residuals = residuals;
-        this.fitted = new Lazy<double[]>(fitted);
-        studentizedSource = studentized;
-        this.studentized = new Lazy<double[]>(studentized);
+        this.fitted = fitted;
+        this.studentized = studentized;
         ResidualSd = residualSd;
         ResidualDf = residualDf;
         NullPlan = nullPlan;
@@ -58,11 +61,7 @@ public sealed record ResidualSet
 
     /// <summary>The studentized residuals for one reading: those kept if already formed (<paramref name="owned"/>
     /// false: do not write to them), else a fresh array that is not kept and the caller may overwrite.</summary>
-    internal double[] StudentizedOnce(out bool owned)
-    {
-        owned = !studentized.IsValueCreated;
-        return owned ? studentizedSource() : studentized.Value;
-    }
+    internal double[] StudentizedOnce(out bool owned) => studentized.Once(out owned);
 
     /// <summary>Leverage, external studentized residuals, Cook's distance and the model description.</summary>
     public ResidualDiagnostics? Diagnostics { get; init; }

@@ -1,4 +1,5 @@
 using CellCheck.Core.Models;
+using CellCheck.Core.Statistics;
 
 namespace CellCheck.Core.Residuals;
 
@@ -15,16 +16,9 @@ internal sealed class CellBlockCases
     private readonly double[] _residuals;
     private readonly double _rss;
     private readonly int _df;
-    private readonly int _largestCell;
 
-    public CellBlockCases(CellBlockFit fit, int[] starts, double[] residuals, double rss, int df)
-    {
+    public CellBlockCases(CellBlockFit fit, int[] starts, double[] residuals, double rss, int df) =>
         (_fit, _starts, _residuals, _rss, _df) = (fit, starts, residuals, rss, df);
-        for (var c = 0; c + 1 < starts.Length; c++)
-        {
-            _largestCell = Math.Max(_largestCell, starts[c + 1] - starts[c]);
-        }
-    }
 
     public double[] Leverage() => Fill((_, h, target) => h.CopyTo(target));
 
@@ -36,21 +30,24 @@ internal sealed class CellBlockCases
 
     private delegate void CellRows(ReadOnlySpan<double> residuals, ReadOnlySpan<double> leverage, Span<double> target);
 
-    /// <summary>One value per row, cells side by side, each cell's leverages in a scratch row of its thread.</summary>
+    /// <summary>One value per row, ranges of cells side by side, each cell's leverages in a scratch row of its range.</summary>
     private double[] Fill(CellRows rows)
     {
         var target = new double[_residuals.Length];
-        Parallel.For(0, _starts.Length - 1, () => new double[_largestCell], (c, _, h) =>
+        GroupChunks.ForEach(_starts, (first, end) =>
         {
-            var (from, length) = (_starts[c], _starts[c + 1] - _starts[c]);
-            for (var k = 0; k < length; k++)
+            var h = new double[GroupChunks.LargestSize(_starts, first, end)];
+            for (var c = first; c < end; c++)
             {
-                h[k] = _fit.Leverage(c, from + k);
-            }
+                var (from, length) = (_starts[c], _starts[c + 1] - _starts[c]);
+                for (var k = 0; k < length; k++)
+                {
+                    h[k] = _fit.Leverage(c, from + k);
+                }
 
-            rows(_residuals.AsSpan(from, length), h.AsSpan(0, length), target.AsSpan(from, length));
-            return h;
-        }, _ => { });
+                rows(_residuals.AsSpan(from, length), h.AsSpan(0, length), target.AsSpan(from, length));
+            }
+        });
         return target;
     }
 }

@@ -45,35 +45,30 @@ public static class RecordingStep
         return new ResolutionSummary(step, tiedShare, ratio, coarse);
     }
 
-    /// <summary>Values equal to another value of their cell: each cell sorted in a scratch row of its thread, cells side
-    /// by side on large data (a count, so the order of the cells does not matter).</summary>
+    /// <summary>Values equal to another value of their cell: each cell sorted in a scratch row of its range, ranges of
+    /// cells side by side on large data (a count, so the order of the cells does not matter).</summary>
     private static int TiedValues(GroupedValues cells)
     {
-        var largest = 0;
-        for (var c = 0; c < cells.GroupCount; c++)
-        {
-            largest = Math.Max(largest, cells.Size(c));
-        }
-
         var tied = 0;
-        var options = new ParallelOptions { MaxDegreeOfParallelism = cells.Count > ParallelValues ? -1 : 1 };
-        Parallel.For(0, cells.GroupCount, options, () => (Scratch: new double[largest], Tied: 0), (c, _, local) =>
+        GroupChunks.ForEach(cells.Starts, (first, end) =>
         {
-            var y = local.Scratch.AsSpan(0, cells.Size(c));
-            cells.Group(c).CopyTo(y);
-            y.Sort();
-            for (var i = 1; i < y.Length; i++)
+            var scratch = new double[GroupChunks.LargestSize(cells.Starts, first, end)];
+            var count = 0;
+            for (var c = first; c < end; c++)
             {
-                local.Tied += y[i] == y[i - 1] ? 1 : 0;
+                var y = scratch.AsSpan(0, cells.Size(c));
+                cells.Group(c).CopyTo(y);
+                y.Sort();
+                for (var i = 1; i < y.Length; i++)
+                {
+                    count += y[i] == y[i - 1] ? 1 : 0;
+                }
             }
 
-            return local;
-        }, local => Interlocked.Add(ref tied, local.Tied));
+            Interlocked.Add(ref tied, count);
+        });
         return tied;
     }
-
-    /// <summary>Above this many values the cells are sorted side by side.</summary>
-    private const int ParallelValues = 100_000;
 
     private static long Gcd(long a, long b)
     {

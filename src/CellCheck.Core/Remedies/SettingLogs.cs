@@ -1,3 +1,5 @@
+using CellCheck.Core.Statistics;
+
 namespace CellCheck.Core.Remedies;
 
 /// <summary>
@@ -7,18 +9,15 @@ namespace CellCheck.Core.Remedies;
 /// </summary>
 internal static class SettingLogs
 {
-    /// <summary>Rows per parallel work item.</summary>
-    private const int Chunk = 65536;
-
     /// <summary>log y[order[k]] at k.</summary>
     /// <exception cref="ArgumentException">A value is not positive and finite.</exception>
     public static double[] Of(ShiftedValues y, int[] order)
     {
         var logs = new double[order.Length];
         var failed = 0;
-        Parallel.For(0, (order.Length + Chunk - 1) / Chunk, chunk =>
+        GroupChunks.ForEachRange(order.Length, (from, to) =>
         {
-            for (var k = chunk * Chunk; k < Math.Min(order.Length, (chunk + 1) * Chunk); k++)
+            for (var k = from; k < to; k++)
             {
                 var v = y[order[k]];
                 if (!(v > 0) || !double.IsFinite(v))

@@ -11,9 +11,6 @@ internal static class AndersonDarlingSum
     /// <summary>Samples at least this long have their terms computed side by side.</summary>
     private const int SideBySide = 1 << 16;
 
-    /// <summary>Pairs per parallel work item.</summary>
-    private const int Chunk = 1 << 15;
-
     /// <summary>A² of the first <paramref name="n"/> values of <paramref name="x"/>, which it overwrites with the terms.</summary>
     public static double Statistic(double[] x, int n)
     {
@@ -24,9 +21,9 @@ internal static class AndersonDarlingSum
 
         var (mean, sd) = MeanAndSd(x.AsSpan(0, n));
         var pairs = ((n - 1) / 2) + 1;
-        Parallel.For(0, (pairs + Chunk - 1) / Chunk, k =>
+        GroupChunks.ForEachRange(pairs, (from, to) =>
         {
-            for (var i = k * Chunk; i < Math.Min(pairs, (k + 1) * Chunk); i++)
+            for (var i = from; i < to; i++)
             {
                 var j = n - 1 - i;
                 var (lowerI, upperI) = StandardNormal.LogCdfBoth((x[i] - mean) / sd);

@@ -1,7 +1,7 @@
 namespace CellCheck.Core.Statistics;
 
 /// <summary>
-/// Runs work over consecutive ranges of groups, side by side on large data. Each range holds whole groups and at least
+/// Runs work over consecutive ranges of groups (or of positions), side by side on large data. Each range holds whole groups and at least
 /// <see cref="ChunkRows"/> values (bar the last), so the result of work that writes only its own groups' slots does
 /// not depend on the ranges or their scheduling.
 /// </summary>
@@ -31,6 +31,20 @@ internal static class GroupChunks
         }
 
         Parallel.For(0, bounds.Count - 1, r => body(bounds[r], bounds[r + 1]));
+    }
+
+    /// <summary>Calls <paramref name="body"/>(from, to) once per range of <see cref="ChunkRows"/> consecutive positions of
+    /// <paramref name="count"/> (fewer in the last), side by side; fewer positions in one range on the calling thread.
+    /// For work where each position is done on its own.</summary>
+    public static void ForEachRange(int count, Action<int, int> body)
+    {
+        if (count <= ChunkRows)
+        {
+            body(0, count);
+            return;
+        }
+
+        Parallel.For(0, (count + ChunkRows - 1) / ChunkRows, r => body(r * ChunkRows, Math.Min(count, (r + 1) * ChunkRows)));
     }
 
     /// <summary>The size of the largest of groups <paramref name="first"/> to <paramref name="end"/> − 1.</summary>

@@ -21,9 +21,6 @@ internal static class ShapiroWilkCoefficients
     private static readonly double[] Last = [0.0, 0.221157, -0.147981, -2.071190, 4.434685, -2.706056];
     private static readonly double[] NextToLast = [0.0, 0.042981, -0.293762, -1.752461, 5.682633, -3.582633];
 
-    /// <summary>Half-vectors at least this long have their scores computed side by side, this many per work item.</summary>
-    private const int SideBySide = 1 << 16;
-
     private static readonly double[]?[] Cache = new double[]?[CacheLimit + 1];
 
     /// <summary>The half vector for n ≥ 3 (shared, cached: callers must not modify it).</summary>
@@ -58,24 +55,14 @@ internal static class ShapiroWilkCoefficients
 
         // Upper-half Blom scores, largest first: m[i] = −Φ⁻¹((i + 1 − 3/8)/(n + 1/4)).
         var m = new double[half];
-        if (half >= SideBySide)
+        // the scores of millions of values side by side (each depends on i only), summed in order below
+        GroupChunks.ForEachRange(half, (from, to) =>
         {
-            // the scores of millions of values side by side (each depends on i only), summed in order below
-            Parallel.For(0, (half + SideBySide - 1) / SideBySide, k =>
-            {
-                for (var i = k * SideBySide; i < Math.Min(half, (k + 1) * SideBySide); i++)
-                {
-                    m[i] = Score(i, n);
-                }
-            });
-        }
-        else
-        {
-            for (var i = 0; i < half; i++)
+            for (var i = from; i < to; i++)
             {
                 m[i] = Score(i, n);
             }
-        }
+        });
 
         var sumSquares = 0.0;
         for (var i = 0; i < half; i++)

@@ -29,10 +29,8 @@ internal static class BlockTraceSums
         var indicator = new double[cells * p]; // Σ_{t∈c} (d_t E_t − E_{t−1} − E_{t+1})
         var eeG = new double[p, p];
         var eeW = new double[p, p];
-        // per cell: Σ m of the cell one step earlier, two steps earlier, one step later
-        var back1 = new double[cells * p];
-        var back2 = new double[cells * p];
-        var ahead1 = new double[cells * p];
+        // per cell: Σ m of the cell one step earlier, two steps earlier, one step later (a pass of its own, side by side)
+        var neighbours = Task.Run(() => NeighbourMeans.Sum(cell, cells, mean, p));
         for (var t = 0; t < n; t++)
         {
             var c = cell[t];
@@ -48,22 +46,20 @@ internal static class BlockTraceSums
                 Pair(dummy, t, t - 1, -1, eeG, crossG, cell, cells, symmetric: true);
                 Pair(dummy, t, t - 1, lag, eeW, crossW, cell, cells, symmetric: true);
                 Indicators(dummy, t - 1, indicator, c * p, -1);
-                Add(back1, c, mean, cell[t - 1], p);
             }
 
             if (t > 1)
             {
                 Pair(dummy, t, t - 2, 1, eeW, crossW, cell, cells, symmetric: true);
-                Add(back2, c, mean, cell[t - 2], p);
             }
 
             if (t < n - 1)
             {
                 Indicators(dummy, t + 1, indicator, c * p, -1);
-                Add(ahead1, c, mean, cell[t + 1], p);
             }
         }
 
+        var (back1, back2, ahead1) = neighbours.Result;
         // the mean-part weights of the lag-one pairs in WᵀW: −(d_t + d_{t−1}), which is −4 except next to the ends
         var laggedW = new double[cells * p];
         for (var i = 0; i < laggedW.Length; i++)
@@ -154,17 +150,6 @@ internal static class BlockTraceSums
             {
                 target[offset + column[t]] += weight;
             }
-        }
-    }
-
-    [MethodImpl(MethodImplOptions.AggressiveInlining)] // called several times per position
-    private static void Add(double[] target, int c, double[] mean, int source, int p)
-    {
-        var row = target.AsSpan(c * p, p);
-        var from = mean.AsSpan(source * p, p);
-        for (var a = 0; a < p; a++)
-        {
-            row[a] += from[a];
         }
     }
 

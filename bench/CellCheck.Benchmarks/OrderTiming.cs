@@ -5,7 +5,8 @@ using CellCheck.Core.Order;
 namespace CellCheck.Benchmarks;
 
 /// <summary>Times the Durbin-Watson moment kernels on a synthetic run sequence shaped like the screen data
-/// (cells at random, day blocks in run order): <c>dw ROWS CELLS</c>.</summary>
+/// (cells at random, day blocks in run order): <c>dw ROWS CELLS</c>; and the single-sequence order kernels on
+/// ROWS normal values: <c>order ROWS</c>.</summary>
 internal static class OrderTiming
 {
     public static void Run(int rows, int cells)
@@ -32,6 +33,39 @@ internal static class OrderTiming
             _ = CellBlockDurbinWatson.Test(e, cell, cells, [dummy], days - 1);
             var blocked = clock.Elapsed.TotalSeconds;
             Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"grouped moments {grouped:F3} s, blocked test {blocked:F3} s"));
+        }
+    }
+
+    public static void Kernels(int rows)
+    {
+        var normal = new Gaussian(new Random(ScreenData.Seed));
+        var e = new double[rows];
+        var t = new double[rows];
+        for (var i = 0; i < rows; i++)
+        {
+            e[i] = normal.Next();
+            t[i] = i + 1;
+        }
+
+        for (var round = 0; round < 2; round++)
+        {
+            var clock = Stopwatch.StartNew();
+            _ = Core.Statistics.Descriptive.Median(e);
+            var median = clock.Elapsed.TotalSeconds;
+            clock.Restart();
+            _ = RunsTest.Test(e);
+            var runs = clock.Elapsed.TotalSeconds;
+            clock.Restart();
+            _ = OrderTrend.Test(e, t);
+            var trend = clock.Elapsed.TotalSeconds;
+            clock.Restart();
+            _ = DurbinWatson.Statistic(e);
+            var d = clock.Elapsed.TotalSeconds;
+            clock.Restart();
+            _ = LagCorrelation.Lag1(e);
+            var lag = clock.Elapsed.TotalSeconds;
+            Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
+                $"median {median:F3} s, runs {runs:F3} s, trend {trend:F3} s, d {d:F3} s, lag-1 {lag:F3} s"));
         }
     }
 }

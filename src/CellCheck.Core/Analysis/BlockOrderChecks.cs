@@ -13,19 +13,15 @@ internal static class BlockOrderChecks
         var block = data.Blocks[0];
         var levels = block.Levels.Count;
         var counts = new int[levels + 1];
-        var code = new int[rows.Length]; // each used row's level, read by row in run order
+        var codes = block.Codes; // each used row's level, read by row in run order (twice rather than kept in a copy)
         var contiguous = true; // each level's rows in one stretch of the run sequence (days logged in order)
+        var first = new int[levels];
         for (var k = 0; k < rows.Length; k++)
         {
-            code[k] = block.Codes[rows[k]];
-            contiguous &= k == 0 || code[k] == code[k - 1] || counts[code[k] + 1] == 0;
-            counts[code[k] + 1]++;
-        }
-
-        var first = new int[levels];
-        for (var k = rows.Length - 1; k >= 0; k--)
-        {
-            first[code[k]] = k;
+            var code = codes[rows[k]];
+            contiguous &= k == 0 || code == codes[rows[k - 1]] || counts[code + 1] == 0;
+            first[code] = counts[code + 1] == 0 ? k : first[code];
+            counts[code + 1]++;
         }
 
         for (var level = 0; level < levels; level++)
@@ -39,7 +35,7 @@ internal static class BlockOrderChecks
         var next = (int[])counts.Clone();
         for (var k = 0; k < rows.Length && !contiguous; k++)
         {
-            var at = next[code[k]]++;
+            var at = next[codes[rows[k]]]++;
             eb[at] = e[k];
             tb[at] = t[k];
         }

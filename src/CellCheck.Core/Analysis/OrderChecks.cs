@@ -31,13 +31,19 @@ internal static class OrderChecks
             notes.Add(NumberText.Count(missing) + " row(s) have no run position and are left out of the order checks.");
         }
 
-        var t = new double[use.Length];
+        // every row used in file order (logged data): the run positions are the column itself, not a copy
+        var t = rows.Length == order.Length && IsIdentity(rows) ? order : new double[use.Length];
         var e = new double[use.Length];
         var grouped = residuals.Residuals;
         var ties = 0;
+        var copy = !ReferenceEquals(t, order);
         for (var k = 0; k < use.Length; k++)
         {
-            t[k] = order[rows[k]];
+            if (copy)
+            {
+                t[k] = order[rows[k]];
+            }
+
             e[k] = grouped[use[k]];
             ties += k > 0 && t[k] == t[k - 1] ? 1 : 0;
         }
@@ -103,6 +109,19 @@ internal static class OrderChecks
 
         var x = Design(partition, residuals, use);
         return x is null ? null : DurbinWatson.Test(e, x, DurbinWatsonAlternative.Positive, ExactLimit);
+    }
+
+    private static bool IsIdentity(int[] rows)
+    {
+        for (var k = 0; k < rows.Length; k++)
+        {
+            if (rows[k] != k)
+            {
+                return false;
+            }
+        }
+
+        return true;
     }
 
     internal static List<CheckResult> SignAndTrend(ReadOnlySpan<double> e, ReadOnlySpan<double> t, double alpha)

@@ -54,7 +54,7 @@ public static class Descriptive
     /// <summary>Sample standard deviation with divisor n − 1; NaN when n &lt; 2.</summary>
     public static double StandardDeviation(ReadOnlySpan<double> x) => Math.Sqrt(Variance(x));
 
-    /// <summary>Median (mean of the two middle values for even n). Uses <paramref name="scratch"/> (length ≥ n) and leaves it reordered.</summary>
+    /// <summary>Median (mean of the two middle values for even n). Uses <paramref name="scratch"/> (length ≥ n below <see cref="RadixLimit"/> values) and leaves it reordered.</summary>
     public static double Median(ReadOnlySpan<double> x, Span<double> scratch)
     {
         if (x.IsEmpty)
@@ -69,10 +69,18 @@ public static class Descriptive
     /// <summary>
     /// The order statistics at n/2 − 1 (<c>Lower</c>, only for even n: otherwise NaN) and n/2 (<c>Upper</c>), 0-based, of a
     /// non-empty span, as <see cref="Median(ReadOnlySpan{double}, Span{double})"/> finds them (sort up to 64 values,
-    /// selection above). Uses <paramref name="scratch"/> (length ≥ n) and leaves it reordered.
+    /// selection above, radix selection from <see cref="RadixLimit"/>). Uses <paramref name="scratch"/> (length ≥ n,
+    /// unused from <see cref="RadixLimit"/>) and leaves it reordered.
     /// </summary>
     internal static (double Lower, double Upper) MiddleOrderStatistics(ReadOnlySpan<double> x, Span<double> scratch)
     {
+        if (x.Length >= RadixLimit)
+        {
+            // long samples: counted by digits in place, without a copy (the scratch is left untouched)
+            var pair = RadixSelection.SelectPair(x, x.Length / 2);
+            return x.Length % 2 == 1 ? (double.NaN, pair.Upper) : pair;
+        }
+
         var s = scratch[..x.Length];
         x.CopyTo(s);
         var mid = s.Length / 2;
@@ -98,8 +106,13 @@ public static class Descriptive
         return (lower, upper);
     }
 
-    /// <summary>Median of a span (allocates a scratch copy; use the scratch overload in hot loops).</summary>
-    public static double Median(ReadOnlySpan<double> x) => Median(x, new double[x.Length]);
+    /// <summary>Median of a span (allocates a scratch copy below <see cref="RadixLimit"/> values; use the scratch overload in hot loops).</summary>
+    public static double Median(ReadOnlySpan<double> x) => Median(x, x.Length >= RadixLimit ? [] : new double[x.Length]);
+
+    /// <summary>From this many values the middle order statistics come from <see cref="RadixSelection"/> (four
+    /// counting passes, no copy) rather than from selection in a copy; below it the fixed cost of its digit table
+    /// (65 536 counts a pass) outweighs the copy.</summary>
+    internal const int RadixLimit = 1 << 16;
 
     /// <summary>True when every value equals the first (zero spread).</summary>
     public static bool IsConstant(ReadOnlySpan<double> x)

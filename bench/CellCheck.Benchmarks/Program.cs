@@ -52,6 +52,9 @@ internal static class Program
             case "order" when args.Length == 2:
                 OrderTiming.Kernels(int.Parse(args[1], CultureInfo.InvariantCulture));
                 return 0;
+            case "intern" when args.Length == 2:
+                InternTiming.Run(args[1]);
+                return 0;
             case "spread" when args.Length == 3:
                 SpreadTiming.Run(int.Parse(args[1], CultureInfo.InvariantCulture), int.Parse(args[2], CultureInfo.InvariantCulture));
                 return 0;
@@ -59,7 +62,7 @@ internal static class Program
                 BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args[1..]);
                 return 0;
             default:
-                Console.Error.WriteLine("usage: generate ROWS CELLS DIR | floor FILE | phases DESIGN | read DESIGN [WARMUP] | pooled ROWS | boxcox DESIGN [REPEATS] | dw ROWS CELLS | order ROWS | spread ROWS CELLS | kernels [BenchmarkDotNet arguments]");
+                Console.Error.WriteLine("usage: generate ROWS CELLS DIR | floor FILE | phases DESIGN | read DESIGN [WARMUP] | pooled ROWS | boxcox DESIGN [REPEATS] | dw ROWS CELLS | order ROWS | intern FILE | spread ROWS CELLS | kernels [BenchmarkDotNet arguments]");
                 return 2;
         }
     }

@@ -10,8 +10,7 @@ namespace CellCheck.IO.Data;
 /// <param name="codes">Where the codes go (a buffer in reserved space), or null for a buffer of its own.</param>
 internal sealed class LevelInterner(string name, ColumnBuffer<int>? codes = null)
 {
-    private readonly Dictionary<string, int> _index = new(StringComparer.Ordinal);
-    private readonly List<string> _labels = [];
+    private readonly LabelTable _table = new();
     private readonly ColumnBuffer<int> _codes = codes ?? new();
 
     public void Add(ReadOnlySpan<char> label)
@@ -22,34 +21,18 @@ internal sealed class LevelInterner(string name, ColumnBuffer<int>? codes = null
             return;
         }
 
-        var lookup = _index.GetAlternateLookup<ReadOnlySpan<char>>();
-        if (!lookup.TryGetValue(label, out var code))
-        {
-            code = _labels.Count;
-            var text = label.ToString();
-            _labels.Add(text);
-            _index.Add(text, code);
-        }
-
-        _codes.Add(code);
+        _codes.Add(_table.Intern(label));
     }
 
     /// <summary>Takes over the rows of <paramref name="next"/>, which read the rows after this interner's: its labels that
     /// are new here are added in its order of first appearance and its codes renumbered to match.</summary>
     public void Append(LevelInterner next)
     {
-        var renumber = new int[next._labels.Count];
+        var renumber = new int[next._table.Count];
         var same = true;
         for (var i = 0; i < renumber.Length; i++)
         {
-            var label = next._labels[i];
-            if (!_index.TryGetValue(label, out var code))
-            {
-                code = _labels.Count;
-                _labels.Add(label);
-                _index.Add(label, code);
-            }
-
+            var code = _table.Intern(next._table.Labels[i]);
             renumber[i] = code;
             same &= code == i;
         }
@@ -69,16 +52,16 @@ internal sealed class LevelInterner(string name, ColumnBuffer<int>? codes = null
 
     /// <summary>The first label that is not a number that can be computed with (finite, magnitude within the range
     /// <see cref="ResponseBuilder.InRange"/> allows), or null when every label is one.</summary>
-    public string? FirstNonNumeric(NumberSyntax syntax) => _labels.FirstOrDefault(l => !ResponseBuilder.InRange(syntax.ParseDouble(l)));
+    public string? FirstNonNumeric(NumberSyntax syntax) => _table.Labels.FirstOrDefault(l => !ResponseBuilder.InRange(syntax.ParseDouble(l)));
 
     public FactorColumn Build(bool asNumbers, NumberSyntax syntax)
     {
-        var order = Enumerable.Range(0, _labels.Count).ToArray();
-        var numbers = new double[_labels.Count];
+        var order = Enumerable.Range(0, _table.Count).ToArray();
+        var numbers = new double[_table.Count];
         var numeric = true;
         for (var i = 0; i < numbers.Length && numeric; i++)
         {
-            numbers[i] = syntax.ParseDouble(_labels[i]);
+            numbers[i] = syntax.ParseDouble(_table.Labels[i]);
             numeric = !double.IsNaN(numbers[i]);
         }
 
@@ -88,7 +71,7 @@ internal sealed class LevelInterner(string name, ColumnBuffer<int>? codes = null
         }
         else
         {
-            Array.Sort(order, (a, b) => string.CompareOrdinal(_labels[a], _labels[b]));
+            Array.Sort(order, (a, b) => string.CompareOrdinal(_table.Labels[a], _table.Labels[b]));
         }
 
         var remap = new int[order.Length];
@@ -96,7 +79,7 @@ internal sealed class LevelInterner(string name, ColumnBuffer<int>? codes = null
         for (var rank = 0; rank < order.Length; rank++)
         {
             remap[order[rank]] = rank;
-            sorted[rank] = _labels[order[rank]];
+            sorted[rank] = _table.Labels[order[rank]];
         }
 
         var codes = _codes.Detach();

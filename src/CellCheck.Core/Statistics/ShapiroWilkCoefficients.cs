@@ -53,8 +53,9 @@ internal static class ShapiroWilkCoefficients
             return a;
         }
 
-        // Upper-half Blom scores, largest first: m[i] = −Φ⁻¹((i + 1 − 3/8)/(n + 1/4)).
-        var m = new double[half];
+        // Upper-half Blom scores, largest first: m[i] = −Φ⁻¹((i + 1 − 3/8)/(n + 1/4)), formed in the weights' own
+        // array and scaled there (a copy of millions of scores would only be touched once)
+        var m = a;
         // the scores of millions of values side by side (each depends on i only), summed in order below
         GroupChunks.ForEachRange(half, (from, to) =>
         {
@@ -73,19 +74,20 @@ internal static class ShapiroWilkCoefficients
         sumSquares *= 2.0;
         var norm = Math.Sqrt(sumSquares);
         var u = 1.0 / Math.Sqrt(n);
-        a[0] = (m[0] / norm) + Polynomial.Evaluate(Last, u);
+        var (m0, m1) = (m[0], half > 1 ? m[1] : 0.0);
+        a[0] = (m0 / norm) + Polynomial.Evaluate(Last, u);
         int first;
         double phi;
         if (n > 5)
         {
-            a[1] = (m[1] / norm) + Polynomial.Evaluate(NextToLast, u);
-            phi = (sumSquares - (2.0 * m[0] * m[0]) - (2.0 * m[1] * m[1]))
+            a[1] = (m1 / norm) + Polynomial.Evaluate(NextToLast, u);
+            phi = (sumSquares - (2.0 * m0 * m0) - (2.0 * m1 * m1))
                 / (1.0 - (2.0 * a[0] * a[0]) - (2.0 * a[1] * a[1]));
             first = 2;
         }
         else
         {
-            phi = (sumSquares - (2.0 * m[0] * m[0])) / (1.0 - (2.0 * a[0] * a[0]));
+            phi = (sumSquares - (2.0 * m0 * m0)) / (1.0 - (2.0 * a[0] * a[0]));
             first = 1;
         }
 

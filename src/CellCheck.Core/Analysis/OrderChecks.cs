@@ -25,7 +25,7 @@ internal static class OrderChecks
 
         var notes = new List<string>();
         var diagnostics = residuals.Diagnostics!;
-        var (use, rows, missing) = RunSequence.UsedRows(order, partition, diagnostics.LeverageOneRows.NotBelowOne == 0 ? null : diagnostics.Leverage);
+        var (use, rows, missing, spare) = RunSequence.UsedRows(order, partition, diagnostics.LeverageOneRows.NotBelowOne == 0 ? null : diagnostics.Leverage);
         if (missing > 0)
         {
             notes.Add(NumberText.Count(missing) + " row(s) have no run position and are left out of the order checks.");
@@ -59,7 +59,7 @@ internal static class OrderChecks
         List<CheckResult> signAndTrend = null!;
         List<BlockOrderResult> byBlock = null!;
         Parallel.Invoke(
-            () => dw = DurbinWatsonOf(data, partition, residuals, use, rows, e),
+            () => dw = DurbinWatsonOf(data, partition, residuals, use, rows, spare, e),
             () => signAndTrend = SignAndTrend(e, t, alpha),
             () => byBlock = data.Blocks.Count == 0 ? [] : BlockOrderChecks.Run(data, rows, e, t, alpha));
         if (dw is null)
@@ -80,19 +80,22 @@ internal static class OrderChecks
     }
 
     /// <summary>Durbin-Watson on the residuals in run order: for the cell-means fit above the exact limit, from the
-    /// O(n) moments of a group-indicator design; otherwise on the fitted design matrix; null when that is too large.</summary>
-    private static DurbinWatsonResult? DurbinWatsonOf(DesignData data, CellPartition partition, ResidualSet residuals, int[] use, int[] rows, double[] e)
+    /// O(n) moments of a group-indicator design; otherwise on the fitted design matrix; null when that is too large.
+    /// The residuals are gathered already, so the cell-based tests write the cells over <paramref name="use"/> and the
+    /// first block's contrast columns over <paramref name="spare"/> (both free by then) instead of two fresh arrays.</summary>
+    private static DurbinWatsonResult? DurbinWatsonOf(DesignData data, CellPartition partition, ResidualSet residuals, int[] use, int[] rows, int[] spare, double[] e)
     {
         if (residuals.Diagnostics!.Absorbed is { } absorbed)
         {
-            var cellRun = RunOrderColumns.CellsInRunOrder(partition, rows, data.RowCount);
+            var cellRun = RunOrderColumns.CellsInRunOrder(partition, rows, spare, use);
             var dummyRun = new int[absorbed.Dummy.Length][];
             for (var j = 0; j < dummyRun.Length; j++)
             {
-                // the fit's contrast column of each block level, looked up by row in run order
+                // the fit's contrast column of each block level, looked up by row in run order (only the first
+                // rows.Length entries are read: the spare array may be longer)
                 var contrast = absorbed.LevelColumns[j];
                 var codes = data.Blocks[j].Codes;
-                var run = dummyRun[j] = new int[rows.Length];
+                var run = dummyRun[j] = j == 0 ? spare : new int[rows.Length];
                 for (var k = 0; k < rows.Length; k++)
                 {
                     run[k] = contrast[codes[rows[k]]];
@@ -104,7 +107,7 @@ internal static class OrderChecks
 
         if (residuals.Diagnostics!.Estimable is null && use.Length > ExactLimit)
         {
-            return GroupedDurbinWatson.Test(e, RunOrderColumns.CellsInRunOrder(partition, rows, data.RowCount), partition.CellCount);
+            return GroupedDurbinWatson.Test(e, RunOrderColumns.CellsInRunOrder(partition, rows, spare, use), partition.CellCount);
         }
 
         var x = Design(partition, residuals, use);

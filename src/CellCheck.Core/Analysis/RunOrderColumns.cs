@@ -7,25 +7,24 @@ namespace CellCheck.Core.Analysis;
 /// (The residuals are read straight from their grouped positions: one scattered read a row, without a row-ordered copy.)</summary>
 internal static class RunOrderColumns
 {
-    /// <summary>The cell of each used row, in run order.</summary>
-    internal static int[] CellsInRunOrder(CellPartition partition, int[] rows, int rowCount)
+    /// <summary>The cell of each used row, in run order, written into <paramref name="target"/> (length: the used rows).</summary>
+    /// <param name="rowMap">Working space of one int a data row, overwritten with the cell of each row.</param>
+    internal static int[] CellsInRunOrder(CellPartition partition, int[] rows, int[] rowMap, int[] target)
     {
-        var cellOfRow = new int[rowCount];
         var starts = partition.Values.Starts;
         for (var c = 0; c < partition.CellCount; c++)
         {
             for (var i = starts[c]; i < starts[c + 1]; i++)
             {
-                cellOfRow[partition.RowOrder[i]] = c;
+                rowMap[partition.RowOrder[i]] = c;
             }
         }
 
-        var result = new int[rows.Length];
         for (var k = 0; k < rows.Length; k++)
         {
-            result[k] = cellOfRow[rows[k]];
+            target[k] = rowMap[rows[k]];
         }
 
-        return result;
+        return target;
     }
 }

@@ -12,7 +12,9 @@ namespace CellCheck.Core.Analysis;
 internal static class RunSequence
 {
     /// <param name="leverage">Leverage of each row in grouped order; null when no row has leverage one.</param>
-    public static (int[] Use, int[] Rows, int Missing) UsedRows(double[] order, CellPartition partition, double[]? leverage)
+    /// <returns>The grouped positions and data rows of the used rows in run order, the number of rows without a run
+    /// position, and the working array of one int a data row that found them (no longer needed: the caller may reuse it).</returns>
+    public static (int[] Use, int[] Rows, int Missing, int[] Spare) UsedRows(double[] order, CellPartition partition, double[]? leverage)
     {
         var rows = order.Length;
         var grouped = new int[rows];
@@ -77,7 +79,7 @@ internal static class RunSequence
             use[k] = grouped[sequence[k]];
         }
 
-        return (use, sequence, missing);
+        return (use, sequence, missing, grouped);
     }
 
     private static void Collect(int[] grouped, int[] rowsInOrder)

@@ -28,7 +28,7 @@ public sealed class RunSequenceTests
         order[7] = double.NaN;
         var leverage = new double[n];
         leverage[11] = 1.0; // a row fitted exactly is left out
-        var (use, rows, missing) = RunSequence.UsedRows(order, partition, leverage);
+        var (use, rows, missing, _) = RunSequence.UsedRows(order, partition, leverage);
         var expected = Enumerable.Range(0, n)
             .Where(i => !double.IsNaN(order[partition.RowOrder[i]]) && leverage[i] < 1)
             .OrderBy(i => order[partition.RowOrder[i]]).ThenBy(i => partition.RowOrder[i]).ToArray();

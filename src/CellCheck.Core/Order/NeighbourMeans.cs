@@ -1,6 +1,3 @@
-using System.Numerics;
-using System.Runtime.InteropServices;
-
 namespace CellCheck.Core.Order;
 
 /// <summary>
@@ -9,7 +6,7 @@ namespace CellCheck.Core.Order;
 /// </summary>
 /// <remarks>
 /// The three sums of a cell are kept side by side (one record of 3p values a cell), so each position writes one
-/// record instead of three scattered rows, and the p-vector additions run in vector lanes; every element still takes
+/// record instead of three scattered rows, and the p-vector additions run in vector lanes (<see cref="VectorKernels.Add"/>); every element still takes
 /// its terms one by one in run order, so the sums are the same doubles as a scalar loop's.
 /// </remarks>
 internal static class NeighbourMeans
@@ -24,17 +21,17 @@ internal static class NeighbourMeans
             var row = record.AsSpan(cell[t] * width, width);
             if (t > 0)
             {
-                Add(row[..p], mean.AsSpan(cell[t - 1] * p, p));
+                VectorKernels.Add(row[..p], mean.AsSpan(cell[t - 1] * p, p));
             }
 
             if (t > 1)
             {
-                Add(row.Slice(p, p), mean.AsSpan(cell[t - 2] * p, p));
+                VectorKernels.Add(row.Slice(p, p), mean.AsSpan(cell[t - 2] * p, p));
             }
 
             if (t < n - 1)
             {
-                Add(row.Slice(2 * p, p), mean.AsSpan(cell[t + 1] * p, p));
+                VectorKernels.Add(row.Slice(2 * p, p), mean.AsSpan(cell[t + 1] * p, p));
             }
         }
 
@@ -50,26 +47,5 @@ internal static class NeighbourMeans
         }
 
         return (back1, back2, ahead1);
-    }
-
-    private static void Add(Span<double> target, ReadOnlySpan<double> source)
-    {
-        var a = 0;
-        if (Vector.IsHardwareAccelerated && target.Length >= Vector<double>.Count)
-        {
-            var to = MemoryMarshal.Cast<double, Vector<double>>(target);
-            var from = MemoryMarshal.Cast<double, Vector<double>>(source);
-            for (var v = 0; v < to.Length; v++)
-            {
-                to[v] += from[v];
-            }
-
-            a = to.Length * Vector<double>.Count;
-        }
-
-        for (; a < target.Length; a++)
-        {
-            target[a] += source[a];
-        }
     }
 }

@@ -3,10 +3,10 @@ namespace CellCheck.Core.Statistics;
 /// <summary>
 /// The k-th smallest value of a span by radix selection (the most-significant-digit selection of Alabi, Blanchard,
 /// Gordon &amp; Steinbach, "Fast k-selection algorithms for graphics processing units", ACM Journal of Experimental
-/// Algorithmics 17, 2012): each double is mapped to an unsigned key in the same order, and 16-bit digits are counted
+/// Algorithmics 17, 2012): each double is mapped to its <see cref="RadixSort"/> key (same order), and 16-bit digits are counted
 /// from the top down, each pass over the values only counting those that share the digits found so far. At most four
 /// sequential reads of the values, no copy and no reordering, so a long sample is not duplicated to find its median.
-/// Exact: the result is one of the values. No NaN; −0 and +0 are told apart by their keys (−0 below +0).
+/// Exact: the result is one of the values (a zero comes back as +0, as the key counts −0 with +0). No NaN.
 /// </summary>
 internal static class RadixSelection
 {
@@ -22,12 +22,12 @@ internal static class RadixSelection
         }
 
         // the value below is the upper one again when at least n − k values are not below it, else the largest below
-        var key = Key(upper);
+        var key = RadixSort.KeyOf(upper);
         var below = 0;
         var largestBelow = 0UL;
         foreach (var v in values)
         {
-            var other = Key(v);
+            var other = RadixSort.KeyOf(v);
             if (other < key)
             {
                 below++;
@@ -35,7 +35,7 @@ internal static class RadixSelection
             }
         }
 
-        return (below < k ? upper : Value(largestBelow), upper);
+        return (below < k ? upper : RadixSort.ValueOf(largestBelow), upper);
     }
 
     public static double Select(ReadOnlySpan<double> values, int k)
@@ -50,7 +50,7 @@ internal static class RadixSelection
             var high = shift + DigitBits; // the digits above this one must equal the prefix found so far
             foreach (var v in values)
             {
-                var key = Key(v);
+                var key = RadixSort.KeyOf(v);
                 if (high == 64 || key >> high == prefix)
                 {
                     counts[(int)((key >> shift) & 0xFFFF)]++;
@@ -66,19 +66,6 @@ internal static class RadixSelection
             prefix = (prefix << DigitBits) | (uint)digit;
         }
 
-        return Value(prefix);
-    }
-
-    /// <summary>An unsigned key in the order of the doubles: the sign bit flipped for positives, all bits for negatives.</summary>
-    private static ulong Key(double v)
-    {
-        var bits = BitConverter.DoubleToInt64Bits(v);
-        return (ulong)(bits ^ ((bits >> 63) | long.MinValue));
-    }
-
-    private static double Value(ulong key)
-    {
-        var bits = (long)key;
-        return BitConverter.Int64BitsToDouble(bits < 0 ? bits ^ long.MinValue : ~bits);
+        return RadixSort.ValueOf(prefix);
     }
 }

@@ -39,6 +39,17 @@ public sealed class RadixSelectionTests
         Assert.Equal((2.75, 2.75), RadixSelection.SelectPair(values, 35_000));
     }
 
+    [Fact]
+    public void A_negative_zero_counts_with_positive_zero_and_comes_back_as_positive_zero()
+    {
+        double[] values = [-1.0, -0.0, 0.0, -0.0, 2.0];
+        var (lower, upper) = RadixSelection.SelectPair(values, 2);
+        Assert.Equal(0.0, lower);
+        Assert.Equal(0.0, upper);
+        Assert.False(double.IsNegative(upper));
+        Assert.Equal(2.0, RadixSelection.Select(values, 4));
+    }
+
     [Theory]
     [InlineData(65_536)]
     [InlineData(65_537)]

@@ -87,7 +87,7 @@ internal static class OrderChecks
     {
         if (residuals.Diagnostics!.Absorbed is { } absorbed)
         {
-            var cellRun = RunOrderColumns.CellsInRunOrder(partition, rows, spare, use);
+            var cellRun = RunOrderColumns.CellsInRunOrder(partition, use, spare);
             var dummyRun = new int[absorbed.Dummy.Length][];
             for (var j = 0; j < dummyRun.Length; j++)
             {
@@ -107,7 +107,7 @@ internal static class OrderChecks
 
         if (residuals.Diagnostics!.Estimable is null && use.Length > ExactLimit)
         {
-            return GroupedDurbinWatson.Test(e, RunOrderColumns.CellsInRunOrder(partition, rows, spare, use), partition.CellCount);
+            return GroupedDurbinWatson.Test(e, RunOrderColumns.CellsInRunOrder(partition, use, spare), partition.CellCount);
         }
 
         var x = Design(partition, residuals, use);

@@ -98,12 +98,17 @@ public sealed class CellPartition
     public int[] CellOfGroupedIndex()
     {
         var cells = new int[RowOrder.Length];
+        WriteCellOfGroupedIndex(cells);
+        return cells;
+    }
+
+    /// <summary>As <see cref="CellOfGroupedIndex()"/>, written into the first positions of <paramref name="target"/>.</summary>
+    internal void WriteCellOfGroupedIndex(Span<int> target)
+    {
         for (var c = 0; c < CellCount; c++)
         {
-            Array.Fill(cells, c, Values.Starts[c], Size(c));
+            target.Slice(Values.Starts[c], Size(c)).Fill(c);
         }
-
-        return cells;
     }
 
     /// <summary>Level index of factor f in cell c.</summary>

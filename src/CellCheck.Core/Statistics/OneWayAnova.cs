@@ -106,7 +106,7 @@ public static class OneWayAnova
     /// Neumaier's (1974) compensated summation so that large groups (NIST SmLs03, 18 000 values) lose no digits to
     /// the running sum.
     /// </summary>
-    private static double CompensatedSumOfSquares(ReadOnlySpan<double> y, double mean)
+    internal static double CompensatedSumOfSquares(ReadOnlySpan<double> y, double mean)
     {
         var sum = 0.0;
         var carry = 0.0;

@@ -30,7 +30,7 @@ internal static class SeparateOneWayAnova
             }
 
             shiftedTotal += y.Length * (mean - origin);
-            ssWithin += CompensatedSumOfSquares(y, mean);
+            ssWithin += OneWayAnova.CompensatedSumOfSquares(y, mean); // the part the split did not change
             k++;
             n += y.Length;
         }
@@ -55,23 +55,5 @@ internal static class SeparateOneWayAnova
         var msWithin = ssWithin / dfWithin;
         var f = msWithin > 0 ? msBetween / msWithin : msBetween > 0 ? double.PositiveInfinity : double.NaN;
         return (ssBetween, ssWithin, f, UpperTail.F(f, dfBetween, dfWithin), dfBetween, dfWithin);
-    }
-
-    private static double CompensatedSumOfSquares(ReadOnlySpan<double> y, double mean)
-    {
-        var sum = 0.0;
-        var carry = 0.0;
-        var deviationSum = 0.0;
-        foreach (var v in y)
-        {
-            var d = v - mean;
-            var term = d * d;
-            var t = sum + term;
-            carry += Math.Abs(sum) >= term ? (sum - t) + term : (term - t) + sum;
-            sum = t;
-            deviationSum += d;
-        }
-
-        return Math.Max(0.0, sum + carry - (deviationSum * deviationSum / y.Length));
     }
 }

@@ -30,6 +30,7 @@ internal sealed class CellBlockFit
         this.cellMeanX = cellMeanX;
         this.inverse = inverse;
         P = p;
+        Cells = cellWeight.Count(w => w > 0);
         var cells = starts.Length - 1;
         cellProjected = new double[cells * p];
         cellQuadratic = new double[cells];
@@ -60,7 +61,7 @@ internal sealed class CellBlockFit
     public int P { get; }
 
     /// <summary>Number of cells holding at least one unit.</summary>
-    public int Cells => cellWeight.Count(w => w > 0);
+    public int Cells { get; }
 
     /// <summary>Cells plus block contrasts: the rank of the fit.</summary>
     public int Rank => Cells + P;

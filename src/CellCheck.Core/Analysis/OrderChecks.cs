@@ -88,7 +88,7 @@ internal static class OrderChecks
         if (residuals.Diagnostics!.Absorbed is { } absorbed)
         {
             var cellRun = RunOrderColumns.CellsInRunOrder(partition, use, spare);
-            var dummyRun = new int[absorbed.Dummy.Length][];
+            var dummyRun = new int[absorbed.LevelColumns.Length][];
             for (var j = 0; j < dummyRun.Length; j++)
             {
                 // the fit's contrast column of each block level, looked up by row in run order (only the first

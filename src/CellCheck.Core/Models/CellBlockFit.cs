@@ -13,7 +13,7 @@ namespace CellCheck.Core.Models;
 internal sealed class CellBlockFit
 {
     private readonly int[] starts;
-    private readonly int[][] dummy;
+    private readonly BlockContrasts contrasts;
     private readonly double[]? weights;
     private readonly double[] cellWeight;
     private readonly double[] cellMeanX;
@@ -21,10 +21,10 @@ internal sealed class CellBlockFit
     private readonly double[] cellQuadratic;
     private readonly double[] cellProjected;
 
-    private CellBlockFit(int[] starts, int[][] dummy, double[]? weights, int p, double[] cellWeight, double[] cellMeanX, double[,] inverse)
+    private CellBlockFit(int[] starts, BlockContrasts contrasts, double[]? weights, int p, double[] cellWeight, double[] cellMeanX, double[,] inverse)
     {
         this.starts = starts;
-        this.dummy = dummy;
+        this.contrasts = contrasts;
         this.weights = weights;
         this.cellWeight = cellWeight;
         this.cellMeanX = cellMeanX;
@@ -50,12 +50,9 @@ internal sealed class CellBlockFit
         }
     }
 
-    /// <summary>Per block factor, the block-contrast column of each unit (−1 for the factor's first level).</summary>
-    public int[][] Dummy => dummy;
-
     /// <summary>Per block factor, the block-contrast column of each level code (−1 for the first level present and for
-    /// codes no unit has): what <see cref="Dummy"/> holds, by level instead of by unit.</summary>
-    public int[][] LevelColumns { get; private init; } = [];
+    /// codes no unit has).</summary>
+    public int[][] LevelColumns => contrasts.Levels;
 
     /// <summary>Number of block-contrast columns.</summary>
     public int P { get; }
@@ -73,8 +70,6 @@ internal sealed class CellBlockFit
     /// <param name="weights">Unit weights (group sizes), or null for one row per unit.</param>
     public static CellBlockFit? Build(int[] starts, IReadOnlyList<int[]> blockCodes, double[]? weights = null)
     {
-        var units = starts[^1];
-        var dummy = new int[blockCodes.Count][];
         var levelColumns = new int[blockCodes.Count][];
         var p = 0;
         for (var j = 0; j < blockCodes.Count; j++)
@@ -100,21 +95,19 @@ internal sealed class CellBlockFit
                 column[code] = !present[code] || reference ? -1 : p++;
                 reference &= !present[code];
             }
-
-            dummy[j] = new int[units];
-            for (var i = 0; i < units; i++)
-            {
-                dummy[j][i] = column[codes[i]];
-            }
         }
+
+        var contrasts = new BlockContrasts(blockCodes, levelColumns);
 
         var cells = starts.Length - 1;
         var centred = new CentredBlockColumns(cells, p);
+        Span<int> columns = stackalloc int[blockCodes.Count];
         for (var c = 0; c < cells; c++)
         {
             for (var i = starts[c]; i < starts[c + 1]; i++)
             {
-                centred.Add(c, dummy, i, weights?[i] ?? 1.0);
+                contrasts.Fill(i, columns);
+                centred.Add(c, columns, weights?[i] ?? 1.0);
             }
 
             centred.FinishCell(c);
@@ -123,11 +116,11 @@ internal sealed class CellBlockFit
         var (cellWeight, cellMeanX, c2) = (centred.Weight, centred.Mean, centred.C);
         if (p == 0)
         {
-            return new CellBlockFit(starts, dummy, weights, 0, cellWeight, cellMeanX, new double[0, 0]) { LevelColumns = levelColumns };
+            return new CellBlockFit(starts, contrasts, weights, 0, cellWeight, cellMeanX, new double[0, 0]);
         }
 
         var matrix = Matrix<double>.Build.DenseOfArray(c2);
-        return Estimable(matrix) ? new CellBlockFit(starts, dummy, weights, p, cellWeight, cellMeanX, matrix.Inverse().ToArray()) { LevelColumns = levelColumns } : null;
+        return Estimable(matrix) ? new CellBlockFit(starts, contrasts, weights, p, cellWeight, cellMeanX, matrix.Inverse().ToArray()) : null;
     }
 
     /// <summary>True when the reduced normal-equation matrix C (symmetric, p ≥ 1) is safely positive definite: its
@@ -157,11 +150,12 @@ internal sealed class CellBlockFit
             for (var i = starts[c]; i < starts[c + 1]; i++)
             {
                 var d = (weights?[i] ?? 1.0) * (y[i] - means[c]);
-                foreach (var column in dummy)
+                for (var j = 0; j < contrasts.Factors; j++)
                 {
-                    if (column[i] >= 0)
+                    var a = contrasts.Column(j, i);
+                    if (a >= 0)
                     {
-                        q[column[i]] += d;
+                        q[a] += d;
                     }
                 }
             }
@@ -187,9 +181,10 @@ internal sealed class CellBlockFit
             for (var i = starts[c]; i < starts[c + 1]; i++)
             {
                 var effect = -centre;
-                foreach (var column in dummy)
+                for (var j = 0; j < contrasts.Factors; j++)
                 {
-                    effect += column[i] >= 0 ? beta[column[i]] : 0;
+                    var a = contrasts.Column(j, i);
+                    effect += a >= 0 ? beta[a] : 0;
                 }
 
                 residuals[i] = y[i] - means[c] - effect;
@@ -201,18 +196,19 @@ internal sealed class CellBlockFit
     public double Leverage(int c, int i)
     {
         var h = (1.0 / cellWeight[c]) + cellQuadratic[c];
-        foreach (var column in dummy)
+        for (var j = 0; j < contrasts.Factors; j++)
         {
-            var a = column[i];
+            var a = contrasts.Column(j, i);
             if (a < 0)
             {
                 continue;
             }
 
             h -= 2 * cellProjected[(c * P) + a];
-            foreach (var other in dummy)
+            for (var k = 0; k < contrasts.Factors; k++)
             {
-                h += other[i] >= 0 ? inverse[a, other[i]] : 0;
+                var b = contrasts.Column(k, i);
+                h += b >= 0 ? inverse[a, b] : 0;
             }
         }
 

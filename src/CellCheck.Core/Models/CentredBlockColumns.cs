@@ -20,23 +20,21 @@ internal sealed class CentredBlockColumns(int cells, int p)
     /// <summary>The cell-centred cross products of the contrast columns.</summary>
     public double[,] C { get; } = new double[p, p];
 
-    /// <param name="dummy">Per block factor, the contrast column of each unit (−1 for the factor's first level).</param>
+    /// <param name="columns">The unit's contrast column on each block factor (−1 for the factor's first level).</param>
     [MethodImpl(MethodImplOptions.AggressiveInlining)] // once per row
-    public void Add(int cell, int[][] dummy, int unit, double weight)
+    public void Add(int cell, ReadOnlySpan<int> columns, double weight)
     {
         Weight[cell] += weight;
-        foreach (var column in dummy)
+        foreach (var a in columns)
         {
-            var a = column[unit];
             if (a < 0)
             {
                 continue;
             }
 
             Mean[(cell * p) + a] += weight;
-            foreach (var other in dummy)
+            foreach (var b in columns)
             {
-                var b = other[unit];
                 if (b >= 0)
                 {
                     C[a, b] += weight;

@@ -27,9 +27,15 @@ public static class CellBlockDurbinWatson
         (double TraceMA, double TraceMA2, int Groups) traces = default;
         var tracing = Task.Run(() => traces = GroupedDurbinWatson.Traces(cell, cells));
         var centred = new CentredBlockColumns(cells, p);
+        Span<int> columns = stackalloc int[dummy.Length];
         for (var t = 0; t < n; t++)
         {
-            centred.Add(cell[t], dummy, t, 1.0);
+            for (var j = 0; j < dummy.Length; j++)
+            {
+                columns[j] = dummy[j][t];
+            }
+
+            centred.Add(cell[t], columns, 1.0);
         }
 
         for (var g = 0; g < cells; g++)

@@ -5,13 +5,15 @@ namespace CellCheck.IO.Data;
 /// without making a string: an open-addressing hash table (linear probing, at most half full) over an ordinal
 /// multiplicative hash of every character. Made for the per-row lookups of a factor column, where a handful to a
 /// few thousand short labels repeat over millions of rows; a general dictionary spends several times as long per
-/// lookup there (`intern FILE` in bench/: 16 against 40 ns a label on the screen data).
+/// lookup there (`intern FILE` in bench/: 16 against 40 ns a label on the screen data). Labels of up to three
+/// characters are first looked up by their packed characters (<see cref="ShortLabelKeys"/>).
 /// </summary>
 internal sealed class LabelTable
 {
     private int[] _slots = new int[16]; // code + 1 of the label in each slot, 0 when free
     private uint[] _hashes = new uint[16];
     private readonly List<string> _labels = [];
+    private readonly ShortLabelKeys _short = new();
 
     /// <summary>The labels, by code.</summary>
     public IReadOnlyList<string> Labels => _labels;
@@ -20,6 +22,25 @@ internal sealed class LabelTable
 
     /// <summary>The code of <paramref name="label"/>, added with the next code when it is new.</summary>
     public int Intern(ReadOnlySpan<char> label)
+    {
+        if (label.Length > ShortLabelKeys.MaxLength)
+        {
+            return InternAny(label);
+        }
+
+        // a short label is found by its packed characters alone
+        var key = ShortLabelKeys.Key(label);
+        var code = _short.Find(key, out var slot);
+        if (code < 0)
+        {
+            code = InternAny(label);
+            _short.Add(key, code, slot);
+        }
+
+        return code;
+    }
+
+    private int InternAny(ReadOnlySpan<char> label)
     {
         var hash = Hash(label);
         var mask = _slots.Length - 1;

@@ -11,6 +11,10 @@ internal sealed record NumberSyntax(char Decimal, char? Thousands)
 {
     public static NumberSyntax Invariant { get; } = new('.', null);
 
+    /// <summary>True when normalising changes nothing in a plain numeral ([+-]digits[.digits]): a decimal point and no
+    /// thousands separator, so such a numeral can be parsed as it stands.</summary>
+    public bool KeepsPlainNumerals => Decimal == '.' && Thousands is null;
+
     /// <summary>Normalises <paramref name="text"/> into <paramref name="buffer"/>; false with <paramref name="grouping"/> when a
     /// thousands separator appears undeclared.</summary>
     public bool TryNormalize(ReadOnlySpan<char> text, Span<char> buffer, out int length, out bool grouping)

@@ -14,6 +14,9 @@ internal static class PlainDecimal
 
     private static readonly double[] PowersOfTen = [.. Enumerable.Range(0, 2 * MaxDigits + 1).Select(k => Math.Pow(10, k))];
 
+    /// <summary>10⁰ … 10¹⁸ as integers, each the previous times ten.</summary>
+    private static readonly long[] IntegerPowers = [.. Enumerable.Range(0, MaxDigits + 1).Select(k => Enumerable.Repeat(10L, k).Aggregate(1L, (p, t) => p * t))];
+
     public static bool TryParse(ReadOnlySpan<char> text, out long mantissa, out int scale)
     {
         mantissa = 0;
@@ -54,6 +57,13 @@ internal static class PlainDecimal
     /// in units of the finer scale (then the caller takes the slower exact route).</summary>
     public static double? Difference(long a, int sa, long b, int sb)
     {
+        if (sa == sb)
+        {
+            // both below 10¹⁸ in magnitude: the exact difference fits a long, and converts as the wide one would
+            var same = (double)(a - b);
+            return Math.Abs(same) < ExactInteger ? same / PowersOfTen[sa] : null;
+        }
+
         var s = Math.Max(sa, sb);
         var difference = (a * (Int128)PowersOfTenInteger(s - sa)) - (b * (Int128)PowersOfTenInteger(s - sb));
         var magnitude = (double)difference;
@@ -64,14 +74,5 @@ internal static class PlainDecimal
     public static double? ToDouble(long mantissa, int scale) =>
         Math.Abs((double)mantissa) < ExactInteger ? mantissa / PowersOfTen[scale] : null;
 
-    private static long PowersOfTenInteger(int k)
-    {
-        var result = 1L;
-        for (var i = 0; i < k; i++)
-        {
-            result *= 10;
-        }
-
-        return result;
-    }
+    private static long PowersOfTenInteger(int k) => IntegerPowers[k];
 }

@@ -35,6 +35,15 @@ internal sealed class ResponseBuilder(string name, string? unit, MissingTokens m
             return;
         }
 
+        // the common case first: a plain numeral that normalising would leave as it is, read where it stands
+        if (syntax.KeepsPlainNumerals && _plainOrigin is { } origin && PlainDecimal.TryParse(raw, out var m, out var s)
+            && PlainDecimal.Difference(m, s, origin.Mantissa, origin.Scale) is { } shifted)
+        {
+            _values.Add(shifted);
+            _decimals = Math.Max(_decimals ?? 0, s);
+            return;
+        }
+
         Span<char> buffer = stackalloc char[Math.Min(raw.Length, 256)];
         if (!syntax.TryNormalize(raw, buffer, out var length, out var grouping))
         {

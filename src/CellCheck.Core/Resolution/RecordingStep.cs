@@ -32,7 +32,8 @@ public static class RecordingStep
                     break;
                 }
 
-                divisor = Gcd(divisor, Math.Abs((long)scaled));
+                // once the divisor is one it stays one: only the exactness of the remaining values is left to check
+                divisor = divisor == 1 ? 1 : Gcd(divisor, Math.Abs((long)scaled));
             }
 
             step = exact && divisor > 0 ? divisor * unit : null;
@@ -45,24 +46,18 @@ public static class RecordingStep
         return new ResolutionSummary(step, tiedShare, ratio, coarse);
     }
 
-    /// <summary>Values equal to another value of their cell: each cell sorted in a scratch row of its range, ranges of
-    /// cells side by side on large data (a count, so the order of the cells does not matter).</summary>
+    /// <summary>Values equal to another value of their cell (<see cref="TieCounter"/>), ranges of cells side by side on
+    /// large data (a count, so the order of the cells does not matter).</summary>
     private static int TiedValues(GroupedValues cells)
     {
         var tied = 0;
         GroupChunks.ForEach(cells.Starts, (first, end) =>
         {
-            var scratch = new double[GroupChunks.LargestSize(cells.Starts, first, end)];
+            var counter = new TieCounter(GroupChunks.LargestSize(cells.Starts, first, end));
             var count = 0;
             for (var c = first; c < end; c++)
             {
-                var y = scratch.AsSpan(0, cells.Size(c));
-                cells.Group(c).CopyTo(y);
-                y.Sort();
-                for (var i = 1; i < y.Length; i++)
-                {
-                    count += y[i] == y[i - 1] ? 1 : 0;
-                }
+                count += counter.Count(cells.Group(c));
             }
 
             Interlocked.Add(ref tied, count);

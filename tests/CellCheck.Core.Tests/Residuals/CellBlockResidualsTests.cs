@@ -147,7 +147,7 @@ public sealed class CellBlockResidualsTests
         var cells = partition.CellOfGroupedIndex();
         var fit = absorbed.Diagnostics!.Absorbed!;
         var actual = CellBlockDurbinWatson.Test(e, run.Select(i => cells[i]).ToArray(), partition.CellCount,
-            fit.Dummy.Select(d => run.Select(i => d[i]).ToArray()).ToArray(), fit.P)!;
+            partition.GroupedCodes(blocks).Select((codes, j) => run.Select(i => fit.LevelColumns[j][codes[i]]).ToArray()).ToArray(), fit.P)!;
         Assert.Equal(expected.ExpectedD, actual.ExpectedD, 1e-9 * expected.ExpectedD);
         Assert.Equal(expected.VarianceD, actual.VarianceD, 1e-9 * expected.VarianceD);
         Assert.Equal(expected.P, actual.P, 1e-9);

@@ -35,7 +35,7 @@ internal static class CellIndexer
             throw new NotSupportedException("The factorial space exceeds 2^63 combinations.");
         }
 
-        var codes = new int[factors.Count][];
+        var codes = new LevelCodes[factors.Count];
         for (var f = 0; f < codes.Length; f++)
         {
             codes[f] = factors[f].Codes;
@@ -58,7 +58,7 @@ internal static class CellIndexer
     }
 
     /// <summary>The mixed-radix key of a row's cell, or −1 when its value is missing or a factor level is.</summary>
-    private static long Key(int[][] codes, long[] radix, double[] values, int row)
+    private static long Key(LevelCodes[] codes, long[] radix, double[] values, int row)
     {
         if (double.IsNaN(values[row]))
         {
@@ -82,7 +82,7 @@ internal static class CellIndexer
 
     /// <summary>A factorial space small enough for a table: the keys are written where the cell indices go, marked as
     /// seen, then replaced by their rank among the seen keys.</summary>
-    private static long[] AssignByTable(int[][] codes, long[] radix, double[] values, int[] cellOfRow, int space)
+    private static long[] AssignByTable(LevelCodes[] codes, long[] radix, double[] values, int[] cellOfRow, int space)
     {
         var table = new int[space]; // 1 where a key is seen, then the key's cell index
         for (var row = 0; row < values.Length; row++)
@@ -115,7 +115,7 @@ internal static class CellIndexer
     }
 
     /// <summary>A factorial space too large for a table: the distinct keys are sorted and looked up by hash.</summary>
-    private static long[] AssignBySort(int[][] codes, long[] radix, double[] values, int[] cellOfRow)
+    private static long[] AssignBySort(LevelCodes[] codes, long[] radix, double[] values, int[] cellOfRow)
     {
         var keys = new long[values.Length];
         var set = new HashSet<long>();

@@ -154,7 +154,7 @@ public sealed class CellPartition
         var cellOfRow = new int[values.Length];
         var cellLevels = CellIndexer.Assign(factors, values, cellOfRow, out var cellCount);
 
-        var blockSource = new int[blocks.Count][];
+        var blockSource = new LevelCodes[blocks.Count];
         for (var b = 0; b < blocks.Count; b++)
         {
             blockSource[b] = blocks[b].Codes;

@@ -1,3 +1,5 @@
+using CellCheck.Core.Data;
+
 namespace CellCheck.Core.Cells;
 
 /// <summary>
@@ -15,7 +17,7 @@ internal static class CellSort
 
     /// <param name="cellOfRow">The cell of each data row, −1 for a row that takes no part.</param>
     /// <param name="rangeCount">Row ranges to sort side by side (tests); by default one below a million rows, otherwise four.</param>
-    public static (int[] Starts, int[] RowOrder, double[] Grouped, int[][] BlockCodes) Sort(int[] cellOfRow, int cellCount, double[] values, int[][] blockSource,
+    public static (int[] Starts, int[] RowOrder, double[] Grouped, int[][] BlockCodes) Sort(int[] cellOfRow, int cellCount, double[] values, LevelCodes[] blockSource,
         int? rangeCount = null)
     {
         // a stable counting sort by cell, in row ranges side by side: each range writes from its own offset within every

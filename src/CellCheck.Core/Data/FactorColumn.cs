@@ -10,6 +10,11 @@ public sealed class FactorColumn
     public const int Missing = -1;
 
     public FactorColumn(string name, IReadOnlyList<string> levels, int[] codes, double[]? levelValues = null)
+        : this(name, levels, LevelCodes.From(codes ?? throw new ArgumentNullException(nameof(codes)), levels?.Count ?? 0), levelValues)
+    {
+    }
+
+    public FactorColumn(string name, IReadOnlyList<string> levels, LevelCodes codes, double[]? levelValues = null)
     {
         ArgumentNullException.ThrowIfNull(name);
         ArgumentNullException.ThrowIfNull(levels);
@@ -38,5 +43,5 @@ public sealed class FactorColumn
     public IReadOnlyList<string> Levels { get; }
 
     /// <summary>Level index per row, or <see cref="Missing"/>.</summary>
-    public int[] Codes { get; }
+    public LevelCodes Codes { get; }
 }

@@ -82,13 +82,8 @@ internal sealed class LevelInterner(string name, ColumnBuffer<int>? codes = null
             sorted[rank] = _table.Labels[order[rank]];
         }
 
-        var codes = _codes.Detach();
-        for (var row = 0; row < codes.Length; row++)
-        {
-            var c = codes[row];
-            codes[row] = c < 0 ? c : remap[c];
-        }
-
+        // the codes renumbered in label order and narrowed in one pass; the reading buffer is then free
+        var codes = LevelCodes.From(_codes.Detach(), sorted.Length, remap);
         return new FactorColumn(name, sorted, codes, asNumbers ? sorted.Select(l => syntax.ParseDouble(l)).ToArray() : null);
     }
 }

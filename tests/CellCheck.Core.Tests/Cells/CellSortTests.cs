@@ -1,4 +1,5 @@
 using CellCheck.Core.Cells;
+using CellCheck.Core.Data;
 
 namespace CellCheck.Core.Tests.Cells;
 
@@ -18,7 +19,7 @@ public sealed class CellSortTests
         const int cells = 37;
         var cellOfRow = Enumerable.Range(0, rows).Select(_ => random.Next(-1, cells)).ToArray();
         var values = Enumerable.Range(0, rows).Select(r => r + 0.5).ToArray();
-        var codes = new[] { Enumerable.Range(0, rows).Select(r => r % 5).ToArray() };
+        var codes = new[] { LevelCodes.From(Enumerable.Range(0, rows).Select(r => r % 5).ToArray(), 5) };
 
         var one = CellSort.Sort(cellOfRow, cells, values, codes, 1);
         var many = CellSort.Sort(cellOfRow, cells, values, codes, ranges);

@@ -19,7 +19,7 @@ public sealed class DataReaderTests
         using var t = new TempDesign("a,b,y\n10,x,1.5\n9,y,2.5\n10,y,3.5\n");
         var d = Read(t).Value!;
         Assert.Equal(["9", "10"], d.Factors[0].Levels);
-        Assert.Equal([1, 0, 1], d.Factors[0].Codes);
+        Assert.Equal([1, 0, 1], d.Factors[0].Codes.ToArray());
         var y = d.Responses[0];
         Assert.Equal([1.5, 2.5, 3.5], y.Values.Select(v => v + y.Origin));
         Assert.Equal([2, 3, 4], d.SourceLines);

@@ -40,7 +40,7 @@ internal static class SameData
         {
             Xunit.Assert.Equal(expected[f].Name, actual[f].Name);
             Xunit.Assert.Equal(expected[f].Levels, actual[f].Levels);
-            Xunit.Assert.Equal(expected[f].Codes, actual[f].Codes);
+            Xunit.Assert.Equal(expected[f].Codes.ToArray(), actual[f].Codes.ToArray());
             Bits(expected[f].LevelValues, actual[f].LevelValues, expected[f].Name);
         }
     }

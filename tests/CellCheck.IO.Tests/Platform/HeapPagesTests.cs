@@ -4,6 +4,7 @@ using CellCheck.IO.Platform;
 
 namespace CellCheck.IO.Tests.Platform;
 
+[Collection(HeapLayoutCollection.Name)]
 public sealed class HeapPagesTests
 {
     [Fact]
@@ -15,9 +16,10 @@ public sealed class HeapPagesTests
             return; // no transparent huge pages here, or the advice turned off: Advise does nothing
         }
 
-        HeapPages.Advise();
+        // the array first, then the advice, as the tool advises the range its large arrays go to
         var array = new double[1 << 22];
         var handle = GCHandle.Alloc(array, GCHandleType.Pinned);
+        HeapPages.Advise();
         try
         {
             var address = (ulong)handle.AddrOfPinnedObject();

@@ -1,3 +1,4 @@
+using CellCheck.Core.Data;
 using CellCheck.Core.Models;
 
 namespace CellCheck.Core.Calibration;
@@ -14,7 +15,7 @@ internal sealed class CellBlockPlan : INullPlan
 
     /// <param name="leverage">Forms the leverage of each row (called only when a simulation asks for residuals).</param>
     /// <param name="usableResiduals">The rows whose 1 − h is above <see cref="LeverageOne"/>.</param>
-    public CellBlockPlan(CellBlockFit fit, int[] cellStarts, Func<double[]> leverage, int usableResiduals, IReadOnlyList<int[]> blockCodes)
+    public CellBlockPlan(CellBlockFit fit, int[] cellStarts, Func<double[]> leverage, int usableResiduals, IReadOnlyList<LevelCodes> blockCodes)
     {
         _fit = fit;
         CellStarts = cellStarts;
@@ -40,9 +41,9 @@ internal sealed class CellBlockPlan : INullPlan
         foreach (var codes in blockCodes)
         {
             Mix(-1);
-            foreach (var code in codes)
+            for (var i = 0; i < codes.Length; i++)
             {
-                Mix(code);
+                Mix(codes[i]);
             }
         }
 

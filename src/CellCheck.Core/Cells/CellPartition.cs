@@ -15,7 +15,7 @@ public sealed class CellPartition
     private readonly Lazy<(int[] Settings, int Count)> _settings;
 
     private CellPartition(IReadOnlyList<FactorColumn> factors, int[] cellLevels, int[] rowOrder, GroupedValues values,
-        IReadOnlyList<FactorColumn> blocks, IReadOnlyList<int[]> blockCodes)
+        IReadOnlyList<FactorColumn> blocks, IReadOnlyList<LevelCodes> blockCodes)
     {
         Factors = factors;
         _cellLevels = cellLevels;
@@ -30,7 +30,7 @@ public sealed class CellPartition
     public IReadOnlyList<FactorColumn> Blocks { get; }
 
     /// <summary>Per block factor, the level index of each grouped value (the block codes in grouped order).</summary>
-    public IReadOnlyList<int[]> BlockCodes { get; }
+    public IReadOnlyList<LevelCodes> BlockCodes { get; }
 
     /// <summary>The identical-settings group of each grouped value and the number of groups (see <see cref="SettingGroups"/>),
     /// computed once.</summary>
@@ -50,26 +50,10 @@ public sealed class CellPartition
 
     /// <summary>The level index of each grouped value on each of the given block factors: the partition's own codes
     /// when these are its blocks, otherwise gathered through <see cref="RowOrder"/>.</summary>
-    public IReadOnlyList<int[]> GroupedCodes(IReadOnlyList<FactorColumn> blocks)
+    public IReadOnlyList<LevelCodes> GroupedCodes(IReadOnlyList<FactorColumn> blocks)
     {
         ArgumentNullException.ThrowIfNull(blocks);
-        if (IsOwn(blocks))
-        {
-            return BlockCodes;
-        }
-
-        var result = new int[blocks.Count][];
-        for (var b = 0; b < blocks.Count; b++)
-        {
-            var codes = blocks[b].Codes;
-            var target = result[b] = new int[RowOrder.Length];
-            for (var i = 0; i < target.Length; i++)
-            {
-                target[i] = codes[RowOrder[i]];
-            }
-        }
-
-        return result;
+        return IsOwn(blocks) ? BlockCodes : blocks.Select(b => b.Codes.Gathered(RowOrder)).ToArray();
     }
 
     /// <summary>True when <paramref name="blocks"/> are the blocks the partition was built with.</summary>

@@ -17,7 +17,7 @@ internal static class CellSort
 
     /// <param name="cellOfRow">The cell of each data row, −1 for a row that takes no part.</param>
     /// <param name="rangeCount">Row ranges to sort side by side (tests); by default one below a million rows, otherwise four.</param>
-    public static (int[] Starts, int[] RowOrder, double[] Grouped, int[][] BlockCodes) Sort(int[] cellOfRow, int cellCount, double[] values, LevelCodes[] blockSource,
+    public static (int[] Starts, int[] RowOrder, double[] Grouped, LevelCodes[] BlockCodes) Sort(int[] cellOfRow, int cellCount, double[] values, LevelCodes[] blockSource,
         int? rangeCount = null)
     {
         // a stable counting sort by cell, in row ranges side by side: each range writes from its own offset within every
@@ -49,10 +49,10 @@ internal static class CellSort
 
         var rowOrder = new int[starts[^1]];
         var grouped = new double[starts[^1]];
-        var blockCodes = new int[blockSource.Length][];
+        var blockCodes = new LevelCodes[blockSource.Length];
         for (var b = 0; b < blockSource.Length; b++)
         {
-            blockCodes[b] = new int[rowOrder.Length];
+            blockCodes[b] = blockSource[b].Empty(rowOrder.Length);
         }
 
         // block codes in grouped order too: read in row order, written scattered (cheaper than gathering later)
@@ -73,7 +73,7 @@ internal static class CellSort
                 grouped[at] = values[row];
                 for (var b = 0; b < blockCodes.Length; b++)
                 {
-                    blockCodes[b][at] = blockSource[b][row];
+                    blockCodes[b].CopyElement(at, blockSource[b], row);
                 }
             }
         });

@@ -14,7 +14,7 @@ internal static class SettingGroups
     }
 
     /// <summary>The groups from block codes given in grouped order (the partition's own, or gathered for other blocks).</summary>
-    internal static (int[] Settings, int Count) Compute(CellPartition partition, IReadOnlyList<FactorColumn> blocks, IReadOnlyList<int[]> codes)
+    internal static (int[] Settings, int Count) Compute(CellPartition partition, IReadOnlyList<FactorColumn> blocks, IReadOnlyList<LevelCodes> codes)
     {
         var radix = blocks.Select(b => b.Levels.Count + 1).ToArray();
         var result = new int[partition.RowOrder.Length];
@@ -63,7 +63,7 @@ internal static class SettingGroups
         return (result, count);
     }
 
-    private static long Key(IReadOnlyList<int[]> codes, int[] radix, int i)
+    private static long Key(IReadOnlyList<LevelCodes> codes, int[] radix, int i)
     {
         var key = 0L;
         for (var j = 0; j < radix.Length; j++)
@@ -74,7 +74,7 @@ internal static class SettingGroups
         return key;
     }
 
-    private static (int[] Settings, int Count) Sparse(CellPartition partition, IReadOnlyList<int[]> codes, int[] radix, int[] result)
+    private static (int[] Settings, int Count) Sparse(CellPartition partition, IReadOnlyList<LevelCodes> codes, int[] radix, int[] result)
     {
         var count = 0;
         var local = new Dictionary<long, int>();

@@ -68,6 +68,47 @@ public sealed class LevelCodes
         return new LevelCodes(null, null, ints, codes.Length);
     }
 
+    /// <summary>The codes at <paramref name="rows"/>, in the same width.</summary>
+    public LevelCodes Gathered(ReadOnlySpan<int> rows)
+    {
+        var result = Empty(rows.Length);
+        for (var k = 0; k < rows.Length; k++)
+        {
+            result.CopyElement(k, this, rows[k]);
+        }
+
+        return result;
+    }
+
+    /// <summary>True when some row has no level.</summary>
+    public bool AnyMissing() => _bytes is { } b ? b.AsSpan().Contains((byte)0) : _shorts is { } s ? s.AsSpan().Contains((ushort)0) : _ints!.AsSpan().IndexOfAnyInRange(int.MinValue, -1) >= 0;
+
+    /// <summary>Codes of this width for <paramref name="length"/> rows, to be filled by <see cref="CopyElement"/>
+    /// (every row must be written before the codes are read).</summary>
+    internal LevelCodes Empty(int length) => new(
+        _bytes is null ? null : GC.AllocateUninitializedArray<byte>(length),
+        _shorts is null ? null : GC.AllocateUninitializedArray<ushort>(length),
+        _ints is null ? null : GC.AllocateUninitializedArray<int>(length),
+        length);
+
+    /// <summary>Writes the code of <paramref name="source"/>'s row <paramref name="row"/> (same width) at <paramref name="at"/>.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)] // per row in the partition's sort
+    internal void CopyElement(int at, LevelCodes source, int row)
+    {
+        if (_bytes is { } b)
+        {
+            b[at] = source._bytes![row];
+        }
+        else if (_shorts is { } s)
+        {
+            s[at] = source._shorts![row];
+        }
+        else
+        {
+            _ints![at] = source._ints![row];
+        }
+    }
+
     /// <summary>The codes at <paramref name="rows"/>, written into <paramref name="target"/>.</summary>
     public void Gather(ReadOnlySpan<int> rows, Span<int> target)
     {

@@ -1,4 +1,5 @@
 using System.Runtime.CompilerServices;
+using CellCheck.Core.Data;
 
 namespace CellCheck.Core.Models;
 
@@ -10,7 +11,7 @@ namespace CellCheck.Core.Models;
 /// <param name="codes">Per block factor, the level code of each unit (all non-negative).</param>
 /// <param name="levels">Per block factor, the contrast column of each level code (−1 for the reference level and for
 /// codes no unit has).</param>
-internal sealed class BlockContrasts(IReadOnlyList<int[]> codes, int[][] levels)
+internal sealed class BlockContrasts(IReadOnlyList<LevelCodes> codes, int[][] levels)
 {
     /// <summary>Number of block factors.</summary>
     public int Factors => levels.Length;

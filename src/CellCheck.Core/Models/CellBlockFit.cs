@@ -1,3 +1,4 @@
+using CellCheck.Core.Data;
 using MathNet.Numerics.LinearAlgebra;
 
 namespace CellCheck.Core.Models;
@@ -68,7 +69,7 @@ internal sealed class CellBlockFit
     /// <param name="starts">Units of cell c are starts[c] .. starts[c + 1] − 1.</param>
     /// <param name="blockCodes">Per block factor, the level code of each unit (all non-negative).</param>
     /// <param name="weights">Unit weights (group sizes), or null for one row per unit.</param>
-    public static CellBlockFit? Build(int[] starts, IReadOnlyList<int[]> blockCodes, double[]? weights = null)
+    public static CellBlockFit? Build(int[] starts, IReadOnlyList<LevelCodes> blockCodes, double[]? weights = null)
     {
         var levelColumns = new int[blockCodes.Count][];
         var p = 0;
@@ -77,15 +78,15 @@ internal sealed class CellBlockFit
             // level codes are small non-negative integers: the contrast column of each present code by a table
             var codes = blockCodes[j];
             var largest = -1;
-            foreach (var code in codes)
+            for (var i = 0; i < codes.Length; i++)
             {
-                largest = Math.Max(largest, code);
+                largest = Math.Max(largest, codes[i]);
             }
 
             var present = new bool[largest + 1];
-            foreach (var code in codes)
+            for (var i = 0; i < codes.Length; i++)
             {
-                present[code] = true;
+                present[codes[i]] = true;
             }
 
             var column = levelColumns[j] = new int[largest + 1];

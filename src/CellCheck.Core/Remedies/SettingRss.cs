@@ -77,7 +77,7 @@ internal sealed class SettingRss : IResidualSumOfSquares
             }
         }
 
-        var between = CellBlockFit.Build(cellStarts, codes, weights);
+        var between = CellBlockFit.Build(cellStarts, codes.Select((c, j) => LevelCodes.From(c, blocks[j].Levels.Count)).ToArray(), weights);
         return between is null ? null : new SettingRss(permutation, starts, between, settings.Length - between.Rank);
     }
 

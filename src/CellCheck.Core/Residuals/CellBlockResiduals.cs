@@ -20,7 +20,7 @@ public sealed class CellBlockResiduals(IReadOnlyList<FactorColumn> blocks, Model
         ArgumentNullException.ThrowIfNull(partition);
         var complete = partition.Factors.Aggregate(1L, (product, f) => product * f.Levels.Count) == partition.CellCount;
         var codes = partition.GroupedCodes(blocks);
-        var fit = complete && partition.RowOrder.Length > 0 && codes.All(c => c.AsSpan().IndexOfAnyInRange(int.MinValue, -1) < 0)
+        var fit = complete && partition.RowOrder.Length > 0 && codes.All(c => !c.AnyMissing())
             ? CellBlockFit.Build(partition.Values.Starts, codes)
             : null;
         if (fit is null)

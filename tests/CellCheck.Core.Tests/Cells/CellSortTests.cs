@@ -27,7 +27,7 @@ public sealed class CellSortTests
         Assert.Equal(one.Starts, many.Starts);
         Assert.Equal(one.RowOrder, many.RowOrder);
         Assert.Equal(one.Grouped, many.Grouped);
-        Assert.Equal(one.BlockCodes[0], many.BlockCodes[0]);
+        Assert.Equal(one.BlockCodes[0].ToArray(), many.BlockCodes[0].ToArray());
         for (var c = 0; c < cells; c++)
         {
             var members = one.RowOrder[one.Starts[c]..one.Starts[c + 1]];

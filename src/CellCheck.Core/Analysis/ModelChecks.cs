@@ -10,7 +10,7 @@ namespace CellCheck.Core.Analysis;
 internal static class ModelChecks
 {
     public static ModelResult Run(CellPartition partition, IReadOnlyList<FactorColumn> blocks, ModelSpec spec, ResidualSet residuals,
-        int[] sourceLines, double alpha)
+        LineNumbers sourceLines, double alpha)
     {
         var diagnostics = residuals.Diagnostics!;
         var info = diagnostics.Model;

@@ -77,7 +77,7 @@ public static class ResponseAnalyzer
         var order = partition.RowOrder;
         var d = r.Diagnostics!;
         return new RowDiagnostics(
-            () => Gather(order, data.SourceLines),
+            () => data.SourceLines.Gather(order),
             partition.CellOfGroupedIndex,
             () =>
             {

@@ -12,6 +12,16 @@ public sealed class DesignData
         int[] sourceLines,
         IReadOnlyList<IReadOnlyList<ExcludedRow>> excluded,
         IReadOnlyList<FactorColumn>? blocks = null)
+        : this(factors, responses, LineNumbers.From(sourceLines ?? throw new ArgumentNullException(nameof(sourceLines))), excluded, blocks)
+    {
+    }
+
+    public DesignData(
+        IReadOnlyList<FactorColumn> factors,
+        IReadOnlyList<ResponseColumn> responses,
+        LineNumbers sourceLines,
+        IReadOnlyList<IReadOnlyList<ExcludedRow>> excluded,
+        IReadOnlyList<FactorColumn>? blocks = null)
     {
         ArgumentNullException.ThrowIfNull(factors);
         ArgumentNullException.ThrowIfNull(responses);
@@ -54,7 +64,7 @@ public sealed class DesignData
     public IReadOnlyList<ResponseColumn> Responses { get; }
 
     /// <summary>Line in the data file of each row (1-based, the header is line 1 for a plain file).</summary>
-    public int[] SourceLines { get; }
+    public LineNumbers SourceLines { get; }
 
     /// <summary>Rows excluded for each response, in the order of <see cref="Responses"/>.</summary>
     public IReadOnlyList<IReadOnlyList<ExcludedRow>> Excluded { get; }

@@ -38,7 +38,7 @@ internal sealed class ColumnSet
         }
 
         RunOrder = columns.RunOrder is null ? null : new RunOrderBuilder(design.RunOrder!.Column, design.DataPath, _missing, numbers, Space(space?.RunOrder));
-        Lines = Space(space?.Lines) ?? new();
+        Lines = new LineRecorder(Space(space?.Lines) ?? new());
     }
 
     public LevelInterner[] Factors { get; }
@@ -48,7 +48,7 @@ internal sealed class ColumnSet
     public RunOrderBuilder? RunOrder { get; }
 
     /// <summary>The data-file line of every kept row.</summary>
-    public ColumnBuffer<int> Lines { get; }
+    public LineRecorder Lines { get; }
 
     /// <summary>Rows left out by the where filter.</summary>
     public int Filtered { get; private set; }

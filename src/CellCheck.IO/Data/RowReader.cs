@@ -59,11 +59,11 @@ internal static class RowReader
         }
 
         // every column is finished on its own (levels put in order and codes renumbered, chunks joined): side by side
-        int[] sourceLines = null!;
+        LineNumbers sourceLines = null!;
         double[]? order = null;
         var built = new FactorColumn[factors.Length];
         var values = new ResponseColumn[responses.Length];
-        var work = new List<Action> { () => sourceLines = lines.Detach() };
+        var work = new List<Action> { () => sourceLines = lines.Build() };
         for (var i = 0; i < factors.Length; i++)
         {
             var f = i;
@@ -89,7 +89,7 @@ internal static class RowReader
             responses.Select(r => r.Excluded).ToArray(),
             built[design.Factors.Count..])
         {
-            RunOrder = design.RunOrder is null ? null : order ?? Array.ConvertAll(sourceLines, l => (double)l),
+            RunOrder = design.RunOrder is null ? null : order ?? Array.ConvertAll(sourceLines.ToArray(), l => (double)l),
             RunOrderColumn = design.RunOrder?.Column,
             FilteredOut = filtered,
         };

@@ -22,7 +22,7 @@ public sealed class DataReaderTests
         Assert.Equal([1, 0, 1], d.Factors[0].Codes.ToArray());
         var y = d.Responses[0];
         Assert.Equal([1.5, 2.5, 3.5], y.Values.Select(v => v + y.Origin));
-        Assert.Equal([2, 3, 4], d.SourceLines);
+        Assert.Equal([2, 3, 4], d.SourceLines.ToArray());
     }
 
     [Fact]

@@ -28,7 +28,7 @@ internal static class SameData
             Xunit.Assert.Equal(e.Excluded[r], a.Excluded[r]);
         }
 
-        Xunit.Assert.Equal(e.SourceLines, a.SourceLines);
+        Xunit.Assert.Equal(e.SourceLines.ToArray(), a.SourceLines.ToArray());
         Bits(e.RunOrder, a.RunOrder, "run order");
         Xunit.Assert.Equal((e.RunOrderColumn, e.FilteredOut), (a.RunOrderColumn, a.FilteredOut));
     }

@@ -26,6 +26,28 @@ public sealed class RadixSortTests
     }
 
     [Theory]
+    [InlineData(0)] // the halves are sorted apart and merged: even and odd lengths, all in one half, none in one
+    [InlineData(1)]
+    [InlineData(2)]
+    [InlineData(3)]
+    public void Halves_sorted_apart_merge_into_the_comparison_sort_order(int shape)
+    {
+        var random = new Random(11 + shape);
+        var n = RadixSort.Threshold + 1 + (shape * 1001);
+        var values = shape switch
+        {
+            0 => Enumerable.Range(0, n).Select(_ => Math.Round((random.NextDouble() - 0.5) * 50) / 4).ToArray(), // many ties
+            1 => Enumerable.Range(0, n).Select(i => (double)(n - i)).ToArray(), // descending: every first-half value above the second's
+            2 => Enumerable.Range(0, n).Select(i => (double)i).ToArray(), // ascending already
+            _ => Enumerable.Range(0, n).Select(i => i % 3 == 0 ? -0.0 : i % 3 == 1 ? 0.0 : -random.NextDouble()).ToArray(), // zeros of both signs
+        };
+        var expected = values.OrderBy(v => v).Select(v => v == 0 ? 0.0 : v).ToArray(); // the sort's rule: −0 reads +0
+        var sorted = (double[])values.Clone();
+        RadixSort.Sort(sorted);
+        Assert.Equal(expected.Select(BitConverter.DoubleToInt64Bits), sorted.Select(BitConverter.DoubleToInt64Bits));
+    }
+
+    [Theory]
     [InlineData(1000)]
     [InlineData(200_000)]
     public void Sorted_keys_read_back_the_sorted_values_with_the_index_of_each(int n)

@@ -7,7 +7,7 @@ namespace CellCheck.Core.Analysis;
 /// block's residuals in run order.</summary>
 internal static class BlockOrderChecks
 {
-    public static List<BlockOrderResult> Run(DesignData data, int[] rows, double[] e, double[] t, double alpha)
+    public static List<BlockOrderResult> Run(DesignData data, int[]? rows, double[] e, double[] t, double alpha)
     {
         var result = new List<BlockOrderResult>();
         var block = data.Blocks[0];
@@ -16,10 +16,10 @@ internal static class BlockOrderChecks
         var codes = block.Codes; // each used row's level, read by row in run order (twice rather than kept in a copy)
         var contiguous = true; // each level's rows in one stretch of the run sequence (days logged in order)
         var first = new int[levels];
-        for (var k = 0; k < rows.Length; k++)
+        for (var k = 0; k < e.Length; k++)
         {
-            var code = codes[rows[k]];
-            contiguous &= k == 0 || code == codes[rows[k - 1]] || counts[code + 1] == 0;
+            var code = codes[rows?[k] ?? k];
+            contiguous &= k == 0 || code == codes[rows?[k - 1] ?? (k - 1)] || counts[code + 1] == 0;
             first[code] = counts[code + 1] == 0 ? k : first[code];
             counts[code + 1]++;
         }
@@ -31,11 +31,11 @@ internal static class BlockOrderChecks
 
         // a stable counting sort of the run-ordered residuals by block level keeps run order within each level;
         // when every level is one stretch already, each level is read in place
-        var (eb, tb) = contiguous ? (e, t) : (new double[rows.Length], new double[rows.Length]);
+        var (eb, tb) = contiguous ? (e, t) : (new double[e.Length], new double[e.Length]);
         var next = (int[])counts.Clone();
-        for (var k = 0; k < rows.Length && !contiguous; k++)
+        for (var k = 0; k < e.Length && !contiguous; k++)
         {
-            var at = next[codes[rows[k]]]++;
+            var at = next[codes[rows?[k] ?? k]]++;
             eb[at] = e[k];
             tb[at] = t[k];
         }

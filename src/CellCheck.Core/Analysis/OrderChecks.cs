@@ -32,14 +32,13 @@ internal static class OrderChecks
         }
 
         // every row used in file order (logged data): the run positions are the column itself, not a copy
-        var t = rows.Length == order.Length && IsIdentity(rows) ? order : new double[use.Length];
+        var t = rows is null ? order : new double[use.Length];
         var e = new double[use.Length];
         var grouped = residuals.Residuals;
         var ties = 0;
-        var copy = !ReferenceEquals(t, order);
         for (var k = 0; k < use.Length; k++)
         {
-            if (copy)
+            if (rows is not null)
             {
                 t[k] = order[rows[k]];
             }
@@ -83,7 +82,7 @@ internal static class OrderChecks
     /// O(n) moments of a group-indicator design; otherwise on the fitted design matrix; null when that is too large.
     /// The residuals are gathered already, so the cell-based tests write the cells over <paramref name="use"/> and the
     /// first block's contrast columns over <paramref name="spare"/> (both free by then) instead of two fresh arrays.</summary>
-    private static DurbinWatsonResult? DurbinWatsonOf(DesignData data, CellPartition partition, ResidualSet residuals, int[] use, int[] rows, int[] spare, double[] e)
+    private static DurbinWatsonResult? DurbinWatsonOf(DesignData data, CellPartition partition, ResidualSet residuals, int[] use, int[]? rows, int[] spare, double[] e)
     {
         if (residuals.Diagnostics!.Absorbed is { } absorbed)
         {
@@ -92,13 +91,13 @@ internal static class OrderChecks
             for (var j = 0; j < dummyRun.Length; j++)
             {
                 // the fit's contrast column of each block level, looked up by row in run order (only the first
-                // rows.Length entries are read: the spare array may be longer)
+                // e.Length entries are read: the spare array may be longer)
                 var contrast = absorbed.LevelColumns[j];
                 var codes = data.Blocks[j].Codes;
-                var run = dummyRun[j] = j == 0 ? spare : new int[rows.Length];
-                for (var k = 0; k < rows.Length; k++)
+                var run = dummyRun[j] = j == 0 ? spare : new int[e.Length];
+                for (var k = 0; k < e.Length; k++)
                 {
-                    run[k] = contrast[codes[rows[k]]];
+                    run[k] = contrast[codes[rows?[k] ?? k]];
                 }
             }
 
@@ -112,19 +111,6 @@ internal static class OrderChecks
 
         var x = Design(partition, residuals, use);
         return x is null ? null : DurbinWatson.Test(e, x, DurbinWatsonAlternative.Positive, ExactLimit);
-    }
-
-    private static bool IsIdentity(int[] rows)
-    {
-        for (var k = 0; k < rows.Length; k++)
-        {
-            if (rows[k] != k)
-            {
-                return false;
-            }
-        }
-
-        return true;
     }
 
     internal static List<CheckResult> SignAndTrend(ReadOnlySpan<double> e, ReadOnlySpan<double> t, double alpha)

@@ -12,9 +12,10 @@ namespace CellCheck.Core.Analysis;
 internal static class RunSequence
 {
     /// <param name="leverage">Leverage of each row in grouped order; null when no row has leverage one.</param>
-    /// <returns>The grouped positions and data rows of the used rows in run order, the number of rows without a run
-    /// position, and the working array of one int a data row that found them (no longer needed: the caller may reuse it).</returns>
-    public static (int[] Use, int[] Rows, int Missing, int[] Spare) UsedRows(double[] order, CellPartition partition, double[]? leverage)
+    /// <returns>The grouped positions and data rows of the used rows in run order (rows null when every row is used in
+    /// file order: run position k is data row k), the number of rows without a run position, and a working array of
+    /// one int a data row that the caller may overwrite.</returns>
+    public static (int[] Use, int[]? Rows, int Missing, int[] Spare) UsedRows(double[] order, CellPartition partition, double[]? leverage)
     {
         var rows = order.Length;
         var grouped = new int[rows];
@@ -57,6 +58,13 @@ internal static class RunSequence
             integral &= t == Math.Floor(t);
             low = Math.Min(low, t);
             high = Math.Max(high, t);
+        }
+
+        if (sorted && count == rows)
+        {
+            // every row used, in file order (logged data): the run sequence is the rows themselves, and the grouped
+            // position of each row is the array just filled; only the working array is new
+            return (grouped, null, missing, GC.AllocateUninitializedArray<int>(rows));
         }
 
         var sequence = new int[count];

@@ -24,12 +24,14 @@ internal static class Phases
         {
             var now = clock.Elapsed.TotalSeconds;
             var live = GC.GetTotalMemory(true); // a full collection: the bytes still reachable after this phase
-            Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{phase,-14} {now - last,8:F3} s  (CPU {Process.GetCurrentProcess().TotalProcessorTime.TotalSeconds - cpu,6:F2} s, allocated {(GC.GetTotalAllocatedBytes() - allocated) / 1e6,6:F0} MB, live {live / 1e6,7:F0} MB, peak working set {Process.GetCurrentProcess().PeakWorkingSet64 / 1e6,7:F0} MB)"));
+            Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"{phase,-14} {now - last,8:F3} s  (CPU {Process.GetCurrentProcess().TotalProcessorTime.TotalSeconds - cpu,6:F2} s, allocated {(GC.GetTotalAllocatedBytes() - allocated) / 1e6,6:F0} MB, live {live / 1e6,7:F0} MB, peak working set {Process.GetCurrentProcess().PeakWorkingSet64 / 1e6,7:F0} MB, phase peak {PhasePeak() / 1e6,6:F0} MB)"));
+            ResetPeak();
             last = clock.Elapsed.TotalSeconds;
             allocated = GC.GetTotalAllocatedBytes();
             cpu = Process.GetCurrentProcess().TotalProcessorTime.TotalSeconds;
         }
 
+        ResetPeak();
         var file = DesignReader.Read(designPath).Value!;
         var data = DataReader.Read(file).Value!;
         Mark("read");
@@ -69,5 +71,27 @@ internal static class Phases
         Mark("remedy");
         Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"GC pauses {GC.GetTotalPauseDuration().TotalSeconds:F2} s, allocated {GC.GetTotalAllocatedBytes() / 1e9:F1} GB, collections gen0 {GC.CollectionCount(0)} gen1 {GC.CollectionCount(1)} gen2 {GC.CollectionCount(2)}, CPU {Process.GetCurrentProcess().TotalProcessorTime.TotalSeconds:F1} s"));
         _ = model;
+    }
+
+    /// <summary>The largest resident set since the last <see cref="ResetPeak"/> (VmHWM), or 0 where Linux's status file is missing.</summary>
+    private static long PhasePeak()
+    {
+        const string status = "/proc/self/status";
+        var line = File.Exists(status) ? File.ReadLines(status).FirstOrDefault(l => l.StartsWith("VmHWM:", StringComparison.Ordinal)) : null;
+        return line is null ? 0 : 1024 * long.Parse(line.Split(' ', StringSplitOptions.RemoveEmptyEntries)[1], CultureInfo.InvariantCulture);
+    }
+
+    /// <summary>Resets the peak resident set to the present one (Linux: "5" into /proc/self/clear_refs), so the next
+    /// phase's peak is its own.</summary>
+    private static void ResetPeak()
+    {
+        try
+        {
+            File.WriteAllText("/proc/self/clear_refs", "5");
+        }
+        catch (Exception ex) when (ex is IOException or UnauthorizedAccessException)
+        {
+            // not Linux, or not allowed: the phase peaks are then peaks since the start
+        }
     }
 }

@@ -1,4 +1,5 @@
 using CellCheck.Core.Data;
+using CellCheck.Core.Remedies;
 using MathNet.Numerics.LinearAlgebra;
 
 namespace CellCheck.Core.Models;
@@ -136,6 +137,16 @@ internal sealed class CellBlockFit
     /// <paramref name="residuals"/> may be <paramref name="y"/> itself (every sum is formed before the first residual is written).</summary>
     public void Residualize(ReadOnlySpan<double> y, Span<double> residuals)
     {
+        var sink = new SpanSink(residuals);
+        Residualize(new SpanValues(y), ref sink);
+    }
+
+    /// <summary>As <see cref="Residualize(ReadOnlySpan{double}, Span{double})"/>, with the values read on demand and
+    /// each residual handed to <paramref name="sink"/> in unit order instead of stored: the same doubles, no array.</summary>
+    public void Residualize<TValues, TSink>(TValues y, ref TSink sink)
+        where TValues : IIndexedValues, allows ref struct
+        where TSink : IResidualSink, allows ref struct
+    {
         var cells = starts.Length - 1;
         var q = new double[P];
         var means = new double[cells];
@@ -188,7 +199,7 @@ internal sealed class CellBlockFit
                     effect += a >= 0 ? beta[a] : 0;
                 }
 
-                residuals[i] = y[i] - means[c] - effect;
+                sink.Put(i, y[i] - means[c] - effect);
             }
         }
     }

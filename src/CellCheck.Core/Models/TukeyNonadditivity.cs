@@ -35,16 +35,19 @@ public static class TukeyNonadditivity
             return TestOutcome.NotTestable(NotTestableReason.NoResidualDegreesOfFreedom);
         }
 
-        var squared = new double[values.Length];
-        for (var i = 0; i < squared.Length; i++)
+        // ŷ² is read on demand and z = M ŷ² handed over value by value: the sums of the stored-array route, in the
+        // same order, without an array as long as the data
+        var squared = new FittedSquares(values, residuals);
+        var scale = 0.0;
+        for (var i = 0; i < values.Length; i++)
         {
-            var fitted = values[i] - residuals[i];
-            squared[i] = fitted * fitted;
+            var v = squared[i];
+            scale += v * v;
         }
 
-        var scale = SumOfSquares(squared);
-        fit.Residualize(squared, squared); // in place: the map reads all its sums before it writes
-        return FromProjection(residuals, squared, scale, rss, residualDf);
+        var sums = new ProjectionSums(residuals);
+        fit.Residualize(squared, ref sums);
+        return FromSums(sums.Ez, sums.Zz, scale, rss, residualDf);
     }
 
     private static double SumOfSquares(double[] values)
@@ -69,6 +72,11 @@ public static class TukeyNonadditivity
             zz += z[i] * z[i];
         }
 
+        return FromSums(ez, zz, scale, rss, residualDf);
+    }
+
+    private static TestOutcome FromSums(double ez, double zz, double scale, double rss, int residualDf)
+    {
         if (!(zz > 1e-20 * scale) || !(rss > 0))
         {
             return TestOutcome.NotTestable(NotTestableReason.DegenerateWithinGroups);

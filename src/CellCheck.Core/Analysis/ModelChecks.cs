@@ -45,7 +45,7 @@ internal static class ModelChecks
             checks.Add(CheckResults.NotTestable(CheckNames.LackOfFit, NotTestableReason.SaturatedModel));
         }
 
-        var screen = OutlierScreen.Screen(diagnostics.StudentizedExternalOnce(), residuals.ResidualDf, out var screened);
+        var screen = diagnostics.ScreenOutliers(residuals.ResidualDf, out var screened);
         var outliers = screen.Where(s => s.PAdjusted < alpha)
             .Select(s => new OutlierRow(sourceLines[partition.RowOrder[s.Row]], s.T, s.PAdjusted)).ToList();
         checks.Add(screened == 0

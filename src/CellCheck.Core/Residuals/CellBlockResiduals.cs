@@ -81,6 +81,7 @@ public sealed class CellBlockResiduals(IReadOnlyList<FactorColumn> blocks, Model
             Diagnostics = new ResidualDiagnostics(cases.Leverage, cases.StudentizedExternal, cases.CooksDistance, info)
             {
                 Absorbed = fit,
+                Cases = cases,
                 LeverageOneRows = (notBelowOne, atLeastOne),
             },
         };

@@ -15,6 +15,9 @@ internal sealed class OnDemandColumn
 
     public OnDemandColumn(Func<double[]> source) => _source = source;
 
+    /// <summary>True when the column has been formed and kept (or was given).</summary>
+    public bool IsKept => Volatile.Read(ref _kept) is not null;
+
     /// <summary>The column, formed once on first use and kept.</summary>
     public double[] Value => Volatile.Read(ref _kept) ?? LazyInitializer.EnsureInitialized(ref _kept, ref _gate, _source!);
 

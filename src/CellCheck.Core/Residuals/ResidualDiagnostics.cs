@@ -81,4 +81,14 @@ public sealed record ResidualDiagnostics
     /// <summary>The externally studentized residuals for one reading: those kept if already formed, else a fresh
     /// copy that is not kept (the outlier screen reads them once; per-row output keeps them).</summary>
     internal double[] StudentizedExternalOnce() => studentizedExternal.Once(out _);
+
+    /// <summary>The fit's own outlier screen over values formed range by range (the absorbed fit), or null.</summary>
+    internal CellBlockCases? Cases { get; init; }
+
+    /// <summary>The outlier screen of the externally studentized residuals: from the column when it is kept (per-row
+    /// output) or there is no range-by-range screen, else without forming the column.</summary>
+    internal IReadOnlyList<(int Row, double T, double PAdjusted)> ScreenOutliers(int residualDf, out int screened) =>
+        Cases is { } cases && !studentizedExternal.IsKept
+            ? cases.ScreenExternal(residualDf, out screened)
+            : OutlierScreen.Screen(StudentizedExternalOnce(), residualDf, out screened);
 }

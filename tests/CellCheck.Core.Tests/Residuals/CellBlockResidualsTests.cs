@@ -201,4 +201,44 @@ public sealed class CellBlockResidualsTests
         var grouped = GroupedDurbinWatson.Test(residuals, cell, 6);
         Assert.Equal(grouped, blocked);
     }
+
+    [Fact]
+    public void The_outlier_screen_formed_cell_by_cell_names_the_rows_of_the_screen_of_the_stored_column()
+    {
+        // 300 000 rows in 60 cells: several ranges of cells side by side; a dozen gross errors spread over the cells
+        // (common practice, no source: the streamed screen must be the stored one, row for row and bit for bit)
+        var random = new Random(77);
+        const int n = 300_000;
+        var (a, b, day, y) = (new int[n], new int[n], new int[n], new double[n]);
+        for (var i = 0; i < n; i++)
+        {
+            (a[i], b[i], day[i]) = (random.Next(6), random.Next(10), random.Next(8));
+            y[i] = 20 + a[i] - (0.5 * b[i]) + (0.3 * day[i]) + NormalDraw(random);
+        }
+
+        foreach (var row in new[] { 17, 40_001, 99_999, 150_000, 222_222, 299_990, 5, 77_777, 123_456, 250_000, 3, 180_000 })
+        {
+            y[row] += (row % 2 == 0 ? 1 : -1) * (5.5 + (row % 7));
+        }
+
+        var factors = new[]
+        {
+            new FactorColumn("a", Enumerable.Range(0, 6).Select(k => "a" + k).ToArray(), a),
+            new FactorColumn("b", Enumerable.Range(0, 10).Select(k => "b" + k).ToArray(), b),
+        };
+        var blocks = new[] { new FactorColumn("day", Enumerable.Range(0, 8).Select(k => "d" + k).ToArray(), day) };
+        var partition = CellPartition.Build(factors, y, blocks);
+        var residuals = new CellBlockResiduals(blocks, ModelSpec.Full(2), "m", new ModelResiduals(blocks, ModelSpec.Full(2), "m")).Compute(partition);
+        var diagnostics = residuals.Diagnostics!;
+
+        var streamed = diagnostics.Cases!.ScreenExternal(residuals.ResidualDf, out var streamedCount);
+        var stored = OutlierScreen.Screen(diagnostics.StudentizedExternal, residuals.ResidualDf, out var storedCount);
+
+        Assert.Equal(storedCount, streamedCount);
+        Assert.True(stored.Count >= 10, $"the screen named {stored.Count} rows");
+        Assert.Equal(stored, streamed);
+    }
+
+    private static double NormalDraw(Random random) =>
+        Math.Sqrt(-2 * Math.Log(1 - random.NextDouble())) * Math.Cos(2 * Math.PI * random.NextDouble());
 }

@@ -31,21 +31,56 @@ internal sealed class CellBlockCases
     private delegate void CellRows(ReadOnlySpan<double> residuals, ReadOnlySpan<double> leverage, Span<double> target);
 
     /// <summary>The outlier screen of the externally studentized residuals (<see cref="OutlierScreen"/>), formed cell by
-    /// cell twice, for the count and the extreme row and then for the named rows, instead of read from a column: the
-    /// same rows and values, without an array as long as the data.</summary>
-    public IReadOnlyList<(int Row, double T, double PAdjusted)> ScreenExternal(int residualDf, out int screened)
+    /// cell instead of read from a column: the same rows and values, without an array as long as the data. One pass
+    /// finds the count, the extreme row and every row at or above the threshold of the rows expected to be screened; the threshold grows with the count, so when at least that many are screened those rows hold every
+    /// row named, and otherwise a second pass at the true threshold finds them.</summary>
+    /// <param name="leverageOneRows">Rows whose leverage is not below one: the others are expected to be screened.</param>
+    public IReadOnlyList<(int Row, double T, double PAdjusted)> ScreenExternal(int residualDf, int leverageOneRows, out int screened)
     {
         screened = 0;
+        var expected = _residuals.Length - leverageOneRows;
         if (residualDf < OutlierScreen.MinimumResidualDf)
         {
             return [];
         }
 
+        var first = Pass(expected > 0 ? OutlierScreen.Threshold(expected, residualDf) : double.PositiveInfinity);
+        screened = first.Count;
+        if (first.Extreme < 0)
+        {
+            return [];
+        }
+
+        var threshold = OutlierScreen.Threshold(first.Count, residualDf);
+        var rows = expected > 0 && first.Count >= expected ? first.AtLeast : Pass(threshold).AtLeast;
+        if (!rows.Exists(r => r.Row == first.Extreme))
+        {
+            rows.Add((first.Extreme, first.Largest));
+            rows.Sort((x, y) => x.Row.CompareTo(y.Row));
+        }
+
+        var named = new List<(int Row, double T, double PAdjusted)>();
+        foreach (var (row, t) in rows)
+        {
+            if (OutlierScreen.Candidate(row, t, first.Extreme, threshold, first.Count, residualDf) is { } candidate)
+            {
+                named.Add(candidate);
+            }
+        }
+
+        return OutlierScreen.Ranked(named);
+    }
+
+    /// <summary>One pass over the externally studentized residuals, ranges of cells side by side: the finite count, the
+    /// first row of largest |t| and its t, and the rows with |t| at least <paramref name="floor"/>, in row order.</summary>
+    private (int Count, int Extreme, double Largest, List<(int Row, double T)> AtLeast) Pass(double floor)
+    {
         var gate = new object();
         var (count, extreme, largest) = (0, -1, 0.0);
+        var ranges = new List<(int First, List<(int Row, double T)> Rows)>();
         ForEachExternal((first, end, external) =>
         {
-            var (finite, row, value) = (0, -1, 0.0);
+            var (finite, row, value, atLeast) = (0, -1, 0.0, new List<(int Row, double T)>());
             for (var c = first; c < end; c++)
             {
                 var t = external(c);
@@ -55,11 +90,20 @@ internal sealed class CellBlockCases
                 {
                     (row, value) = (at, t[at - _starts[c]]);
                 }
+
+                for (var i = 0; i < t.Length; i++)
+                {
+                    if (Math.Abs(t[i]) >= floor && double.IsFinite(t[i]))
+                    {
+                        atLeast.Add((_starts[c] + i, t[i]));
+                    }
+                }
             }
 
             lock (gate)
             {
                 count += finite;
+                ranges.Add((first, atLeast));
                 // the first largest |t| in row order, as one pass over the column finds it
                 if (row >= 0 && (extreme < 0 || Math.Abs(value) > Math.Abs(largest) || (Math.Abs(value) == Math.Abs(largest) && row < extreme)))
                 {
@@ -67,35 +111,7 @@ internal sealed class CellBlockCases
                 }
             }
         });
-        screened = count;
-        if (extreme < 0)
-        {
-            return [];
-        }
-
-        var (threshold, total) = (OutlierScreen.Threshold(count, residualDf), count);
-        var ranges = new List<(int First, List<(int Row, double T, double PAdjusted)> Named)>();
-        ForEachExternal((first, end, external) =>
-        {
-            var named = new List<(int Row, double T, double PAdjusted)>();
-            for (var c = first; c < end; c++)
-            {
-                var t = external(c);
-                for (var i = 0; i < t.Length; i++)
-                {
-                    if (OutlierScreen.Candidate(_starts[c] + i, t[i], extreme, threshold, total, residualDf) is { } candidate)
-                    {
-                        named.Add(candidate);
-                    }
-                }
-            }
-
-            lock (gate)
-            {
-                ranges.Add((first, named));
-            }
-        });
-        return OutlierScreen.Ranked([.. ranges.OrderBy(r => r.First).SelectMany(r => r.Named)]);
+        return (count, extreme, largest, [.. ranges.OrderBy(r => r.First).SelectMany(r => r.Rows)]);
     }
 
     private delegate ReadOnlySpan<double> CellExternal(int cell);

@@ -89,6 +89,6 @@ public sealed record ResidualDiagnostics
     /// output) or there is no range-by-range screen, else without forming the column.</summary>
     internal IReadOnlyList<(int Row, double T, double PAdjusted)> ScreenOutliers(int residualDf, out int screened) =>
         Cases is { } cases && !studentizedExternal.IsKept
-            ? cases.ScreenExternal(residualDf, out screened)
+            ? cases.ScreenExternal(residualDf, LeverageOneRows.NotBelowOne, out screened)
             : OutlierScreen.Screen(StudentizedExternalOnce(), residualDf, out screened);
 }

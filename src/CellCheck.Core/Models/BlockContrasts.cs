@@ -13,6 +13,40 @@ namespace CellCheck.Core.Models;
 /// codes no unit has).</param>
 internal sealed class BlockContrasts(IReadOnlyList<LevelCodes> codes, int[][] levels)
 {
+    /// <summary>Treatment contrasts of the given codes: on each factor the lowest code present is the reference level
+    /// (no column) and every other code present gets the next column; <paramref name="p"/> is the number of columns.</summary>
+    public static BlockContrasts Treatment(IReadOnlyList<LevelCodes> codes, out int p)
+    {
+        var levels = new int[codes.Count][];
+        p = 0;
+        for (var j = 0; j < codes.Count; j++)
+        {
+            // level codes are small non-negative integers: the contrast column of each present code by a table
+            var unit = codes[j];
+            var largest = -1;
+            for (var i = 0; i < unit.Length; i++)
+            {
+                largest = Math.Max(largest, unit[i]);
+            }
+
+            var present = new bool[largest + 1];
+            for (var i = 0; i < unit.Length; i++)
+            {
+                present[unit[i]] = true;
+            }
+
+            var column = levels[j] = new int[largest + 1];
+            var reference = true;
+            for (var code = 0; code <= largest; code++)
+            {
+                column[code] = !present[code] || reference ? -1 : p++;
+                reference &= !present[code];
+            }
+        }
+
+        return new BlockContrasts(codes, levels);
+    }
+
     /// <summary>Number of block factors.</summary>
     public int Factors => levels.Length;
 

@@ -72,34 +72,7 @@ internal sealed class CellBlockFit
     /// <param name="weights">Unit weights (group sizes), or null for one row per unit.</param>
     public static CellBlockFit? Build(int[] starts, IReadOnlyList<LevelCodes> blockCodes, double[]? weights = null)
     {
-        var levelColumns = new int[blockCodes.Count][];
-        var p = 0;
-        for (var j = 0; j < blockCodes.Count; j++)
-        {
-            // level codes are small non-negative integers: the contrast column of each present code by a table
-            var codes = blockCodes[j];
-            var largest = -1;
-            for (var i = 0; i < codes.Length; i++)
-            {
-                largest = Math.Max(largest, codes[i]);
-            }
-
-            var present = new bool[largest + 1];
-            for (var i = 0; i < codes.Length; i++)
-            {
-                present[codes[i]] = true;
-            }
-
-            var column = levelColumns[j] = new int[largest + 1];
-            var reference = true; // the lowest present code is the reference level (no column)
-            for (var code = 0; code <= largest; code++)
-            {
-                column[code] = !present[code] || reference ? -1 : p++;
-                reference &= !present[code];
-            }
-        }
-
-        var contrasts = new BlockContrasts(blockCodes, levelColumns);
+        var contrasts = BlockContrasts.Treatment(blockCodes, out var p);
 
         var cells = starts.Length - 1;
         var centred = new CentredBlockColumns(cells, p);

@@ -44,40 +44,10 @@ internal static class RadixSort
             keys[i] = Key(values[i]);
         }
 
-        var half = values.Length / 2;
-        var spare = GC.AllocateUninitializedArray<ulong>(values.Length - half);
-        SortHalf(keys[..half], spare);
-        SortHalf(keys[half..], spare);
-        MergeHalves(keys, half, spare);
+        RadixHalves.Sort(keys);
         for (var i = 0; i < values.Length; i++)
         {
             values[i] = Value(keys[i]);
-        }
-    }
-
-    /// <summary>Sorts <paramref name="keys"/> in place through <paramref name="spare"/> (at least as long).</summary>
-    private static void SortHalf(Span<ulong> keys, ulong[] spare)
-    {
-        if (RadixPasses.Run(keys, spare, [], [], keys.Length))
-        {
-            spare.AsSpan(0, keys.Length).CopyTo(keys);
-        }
-    }
-
-    /// <summary>Merges the sorted runs keys[..half] and keys[half..] in place: the first run is copied to
-    /// <paramref name="spare"/> and merged with the second from the front (a write never overtakes the second run's reads).</summary>
-    private static void MergeHalves(Span<ulong> keys, int half, ulong[] spare)
-    {
-        keys[..half].CopyTo(spare);
-        int i = 0, j = half, k = 0;
-        while (i < half && j < keys.Length)
-        {
-            keys[k++] = spare[i] <= keys[j] ? spare[i++] : keys[j++];
-        }
-
-        while (i < half)
-        {
-            keys[k++] = spare[i++];
         }
     }
 

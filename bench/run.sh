@@ -10,6 +10,7 @@
 #   TIMEOUT=SECONDS  limit for each timed tool (default 3600); a tool that runs over is reported as "timeout"
 #   REPEAT=N         rounds per file (default 1); each round runs every tool once, in turn, and the table gives the
 #                    median seconds and the largest peak memory over the rounds (a shared machine is noisy)
+#   PUBLISH=0        time the plain Release build instead of the published tool (self-contained, ReadyToRun)
 set -euo pipefail
 
 [[ -f CellCheck.sln && -d bench/reference ]] || { echo "run bench/run.sh from the repository root" >&2; exit 2; }
@@ -26,13 +27,20 @@ RUNS=("$@")
 [[ $RESULTS == *.md ]] || { echo "RESULTS must name a .md file (the benchmark never writes over its inputs)" >&2; exit 2; }
 
 BENCH=bench/CellCheck.Benchmarks/bin/Release/net10.0/CellCheck.Benchmarks
+PUBLISH=${PUBLISH:-1}
+case $(uname -m) in aarch64) RID=linux-arm64 ;; *) RID=linux-x64 ;; esac
 CELLCHECK=src/CellCheck.Cli/bin/Release/net10.0/cellcheck
+[[ $PUBLISH == 1 ]] && CELLCHECK=$BENCH_DIR/cellcheck-$RID/cellcheck
 PYTHON=/usr/bin/python3   # the Debian python, which has the Debian scipy and pandas
 
 LOAD=$(cut -d' ' -f1-3 /proc/loadavg)   # before anything runs: other work on the machine skews the timings
 echo "building Release ..."
 dotnet build bench/CellCheck.Benchmarks -c Release -nologo -v q >/dev/null
 dotnet build src/CellCheck.Cli -c Release -nologo -v q >/dev/null
+if [[ $PUBLISH == 1 ]]; then
+  echo "publishing the tool for $RID (self-contained, ReadyToRun; a minute or two) ..."
+  dotnet publish src/CellCheck.Cli -c Release -r "$RID" -nologo -v q -o "$BENCH_DIR/cellcheck-$RID" >/dev/null
+fi
 
 # Which reference tools are here; a missing one is skipped with a note, not an error.
 HAVE_R=no HAVE_PY=no
@@ -52,7 +60,7 @@ machine() {
   echo "- CPU: $(nproc) cores, $(grep -m1 'model name' /proc/cpuinfo | cut -d: -f2- | sed 's/^ *//')"
   echo "- RAM: $(awk '/MemTotal/ {printf "%.1f GB", $2 / 1048576}' /proc/meminfo)"
   echo "- load average before the run: $LOAD"
-  echo "- .NET SDK: $(dotnet --version)"
+  echo "- .NET SDK: $(dotnet --version); CellCheck timed as $([[ $PUBLISH == 1 ]] && echo "published for $RID (self-contained, composite ReadyToRun)" || echo "the plain Release build")"
   [[ $HAVE_R == yes ]] && echo "- $(Rscript -e 'cat(R.version.string, "; data.table", format(packageVersion("data.table")))')"
   [[ $HAVE_PY == yes ]] && echo "- $($PYTHON -c 'import sys, scipy, pandas, numpy; print(f"Python {sys.version.split()[0]}; scipy {scipy.__version__}; pandas {pandas.__version__}; numpy {numpy.__version__}")')"
   return 0

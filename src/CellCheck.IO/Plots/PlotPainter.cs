@@ -234,40 +234,34 @@ internal sealed class PlotPainter(PlotLayout layout, bool textAsPaths)
             return;
         }
 
-        var placed = new List<SKRect>();
-        for (var i = 0; i < points.X.Count && i < labels.Count; i++)
+        var placer = new LabelPlacer(plot);
+        using var halo = Fill(P.Background.WithAlpha(220));
+        var colour = points.Role == SeriesRole.Highlight ? P.Alert : P.Ink;
+        using var leader = Stroke(colour.WithAlpha(160), 0.6f);
+        // the most extreme points first (largest |y|): when the panel is crowded, the labels left out are the milder ones
+        var order = Enumerable.Range(0, Math.Min(points.X.Count, labels.Count)).Where(i => labels[i] is not null)
+            .OrderByDescending(i => Math.Abs(points.Y[i]));
+        foreach (var i in order)
         {
-            if (labels[i] is not { } label)
-            {
-                continue;
-            }
-
+            var label = labels[i]!;
             var px = MapX(plot, x, points.X[i]);
             var py = MapY(plot, y, points.Y[i]);
             var w = _fonts.PointLabel.MeasureText(label);
             var h = _fonts.PointLabel.Size;
             var r = (points.Role == SeriesRole.Highlight ? M.HighlightRadius : PointRadius(points.X.Count)) + 3;
-            // beside the point, right or left, then a line above or below, the first that stays inside and clear of earlier labels
-            (float Dx, float Dy)[] tries = [(r, 0), (-r - w, 0), (r, -h - 1), (-r - w, -h - 1), (r, h + 1), (-r - w, h + 1)];
-            SKRect? best = null;
-            foreach (var (dx, dy) in tries)
+            if (placer.Place(px, py, w, h, r) is not { } place)
             {
-                var baseline = py + (h * 0.36f) + dy;
-                var rect = new SKRect(px + dx - 1, baseline - h, px + dx + w + 1, baseline + 2);
-                var inside = rect.Left >= plot.Left + 1 && rect.Right <= plot.Right - 1 && rect.Top >= plot.Top + 1 && rect.Bottom <= plot.Bottom - 1;
-                if (inside && !placed.Any(p => p.IntersectsWith(rect)))
-                {
-                    best = rect;
-                    break;
-                }
+                continue; // crowded: left out rather than drawn over another label
             }
 
-            var chosen = best ?? new SKRect(Math.Clamp(px + r - 1, plot.Left + 1, plot.Right - w - 3), Math.Clamp(py - (h * 0.64f), plot.Top + 1, plot.Bottom - h - 3), 0, 0);
-            chosen = new SKRect(chosen.Left, chosen.Top, chosen.Left + w + 2, chosen.Top + h + 2);
-            placed.Add(chosen);
-            using var halo = Fill(P.Background.WithAlpha(220));
-            canvas.DrawRect(chosen, halo);
-            Text(canvas, new PlacedText(label, chosen.Left + 1, chosen.Top + h, _fonts.PointLabel, points.Role == SeriesRole.Highlight ? P.Alert : P.Ink, SKTextAlign.Left));
+            var (box, withLeader) = place;
+            if (withLeader)
+            {
+                canvas.DrawLine(px, py, box.Left < px ? box.Right : box.Left, box.MidY, leader);
+            }
+
+            canvas.DrawRect(box, halo);
+            Text(canvas, new PlacedText(label, box.Left + 1, box.Top + h, _fonts.PointLabel, colour, SKTextAlign.Left));
         }
     }
 

@@ -32,7 +32,15 @@ internal static class RadixSort
     {
         if (values.Length < Threshold)
         {
-            values.Sort();
+            if (values.Length >= ByteRadixSort.MinLength)
+            {
+                ByteRadixSort.Sort(values);
+            }
+            else
+            {
+                values.Sort();
+            }
+
             return;
         }
 

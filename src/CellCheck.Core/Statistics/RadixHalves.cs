@@ -19,7 +19,7 @@ internal static class RadixHalves
     /// <summary>Sorts <paramref name="keys"/> in place through <paramref name="spare"/> (at least as long).</summary>
     private static void SortHalf(Span<ulong> keys, ulong[] spare)
     {
-        if (RadixPasses.Run(keys, spare, [], [], keys.Length))
+        if (RadixPasses.Run<WideDigit>(keys, spare, [], [], keys.Length))
         {
             spare.AsSpan(0, keys.Length).CopyTo(keys);
         }

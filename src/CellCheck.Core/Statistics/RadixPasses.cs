@@ -5,34 +5,33 @@ namespace CellCheck.Core.Statistics;
 /// passes skipped where every key has the same digit.</summary>
 internal static class RadixPasses
 {
-    /// <summary>Bits per digit: 2048 buckets keep every pass's scatter targets within the cache (16-bit digits, with
-    /// 65 536 targets, spent most of their time in cache and TLB misses).</summary>
-    private const int DigitBits = 11;
-
-    private const int Passes64 = (64 + DigitBits - 1) / DigitBits;
-
-    /// <summary>Runs the passes between the two buffers; true when the result ended in the spare buffers.</summary>
+    /// <summary>Runs the passes between the two buffers, on digits of <typeparamref name="TDigit"/>'s width; true when the
+    /// result ended in the spare buffers.</summary>
     /// <param name="payload">Values carried with the keys (empty for none), with <paramref name="carried"/> their spare buffer.</param>
-    public static bool Run(Span<ulong> keys, Span<ulong> spare, Span<int> payload, Span<int> carried, int n)
+    public static bool Run<TDigit>(Span<ulong> keys, Span<ulong> spare, Span<int> payload, Span<int> carried, int n)
+        where TDigit : struct, IRadixDigit
     {
-        const int buckets = 1 << DigitBits;
-        const ulong mask = buckets - 1;
-        // every pass's histogram from one read of the keys
-        var counts = new int[Passes64 * buckets];
+        var buckets = 1 << TDigit.Bits;
+        var mask = (ulong)buckets - 1;
+        var passes = (64 + TDigit.Bits - 1) / TDigit.Bits;
+        // every pass's histogram from one read of the keys (on the stack when small)
+        Span<int> counts = passes * buckets <= StackCounts ? stackalloc int[StackCounts] : new int[passes * buckets];
+        counts = counts[..(passes * buckets)];
+        counts.Clear();
         for (var i = 0; i < n; i++)
         {
             var key = keys[i];
-            for (var pass = 0; pass < Passes64; pass++)
+            for (var pass = 0; pass < passes; pass++)
             {
-                counts[(pass * buckets) + (int)((key >> (pass * DigitBits)) & mask)]++;
+                counts[(pass * buckets) + (int)((key >> (pass * TDigit.Bits)) & mask)]++;
             }
         }
 
         var swapped = false;
-        for (var pass = 0; pass < Passes64; pass++)
+        for (var pass = 0; pass < passes; pass++)
         {
-            var shift = pass * DigitBits;
-            var offsets = counts.AsSpan(pass * buckets, buckets);
+            var shift = pass * TDigit.Bits;
+            var offsets = counts.Slice(pass * buckets, buckets);
             if (offsets[(int)((keys[0] >> shift) & mask)] == n)
             {
                 continue; // every key has this digit
@@ -65,4 +64,7 @@ internal static class RadixPasses
 
         return swapped;
     }
+
+    /// <summary>Histogram counts up to this many are kept on the stack (the byte digits' 8 × 256).</summary>
+    private const int StackCounts = 2048;
 }

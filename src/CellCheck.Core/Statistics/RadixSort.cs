@@ -83,7 +83,7 @@ internal static class RadixSort
             }
 
             payload.CopyTo(source);
-            var inSpare = RadixPasses.Run(keys, spare, source, carried, values.Length);
+            var inSpare = RadixPasses.Run<WideDigit>(keys, spare, source, carried, values.Length);
             var (sortedKeys, sortedPayload) = inSpare ? (spare, carried) : (keys, source);
             for (var i = 0; i < values.Length; i++)
             {
@@ -130,7 +130,7 @@ internal static class RadixSort
 
         var spare = GC.AllocateUninitializedArray<ulong>(n);
         var carried = GC.AllocateUninitializedArray<int>(n);
-        if (RadixPasses.Run(keys, spare, order, carried, n))
+        if (RadixPasses.Run<WideDigit>(keys, spare, order, carried, n))
         {
             order = carried;
             free = keys;

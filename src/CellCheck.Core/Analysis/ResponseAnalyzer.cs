@@ -91,12 +91,7 @@ public static class ResponseAnalyzer
             },
             r.Residuals, () => r.Studentized, () => d.StudentizedExternal, () => d.Leverage, () => d.CooksDistance,
             () => data.RunOrder is { } ro ? Gather(order, ro) : null,
-            () => data.Blocks.Select(b =>
-            {
-                var codes = new int[order.Length];
-                b.Codes.Gather(order, codes);
-                return codes;
-            }).ToArray())
+            () => data.Blocks.Select(b => b.Codes.Gather(order)).ToArray())
         {
             BlockLevels = data.Blocks.Select(b => b.Levels).ToArray(),
         };

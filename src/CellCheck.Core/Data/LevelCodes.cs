@@ -109,14 +109,16 @@ public sealed class LevelCodes
         }
     }
 
-    /// <summary>The codes at <paramref name="rows"/>, written into <paramref name="target"/>.</summary>
-    public void Gather(ReadOnlySpan<int> rows, Span<int> target)
+    /// <summary>The codes at <paramref name="rows"/>, as a new array.</summary>
+    public int[] Gather(ReadOnlySpan<int> rows)
     {
-        ArgumentOutOfRangeException.ThrowIfLessThan(target.Length, rows.Length);
+        var result = new int[rows.Length];
         for (var k = 0; k < rows.Length; k++)
         {
-            target[k] = this[rows[k]];
+            result[k] = this[rows[k]];
         }
+
+        return result;
     }
 
     /// <summary>Every row's code, as a new array.</summary>

@@ -63,7 +63,7 @@ internal sealed class BlockContrasts(IReadOnlyList<LevelCodes> codes, int[][] le
     {
         for (var j = 0; j < levels.Length; j++)
         {
-            target[j] = levels[j][codes[j][unit]];
+            target[j] = Column(j, unit);
         }
     }
 }

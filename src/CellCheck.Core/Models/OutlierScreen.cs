@@ -14,6 +14,10 @@ public static class OutlierScreen
 {
     public const int MinimumResidualDf = 3;
 
+    /// <returns>The screened rows whose Bonferroni-adjusted p is below one, and always the most extreme row, most
+    /// extreme first; empty (and <paramref name="screened"/> 0) when skipped. Rows below the |t| that makes the
+    /// adjusted p reach one are not listed (their adjusted p is 1), so at a million rows only a handful of t
+    /// probabilities are computed.</returns>
     public static IReadOnlyList<(int Row, double T, double PAdjusted)> Screen(ReadOnlySpan<double> external, int residualDf, out int screened)
     {
         screened = 0;

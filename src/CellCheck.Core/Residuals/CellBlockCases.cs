@@ -32,8 +32,9 @@ internal sealed class CellBlockCases
 
     /// <summary>The outlier screen of the externally studentized residuals (<see cref="OutlierScreen"/>), formed cell by
     /// cell instead of read from a column: the same rows and values, without an array as long as the data. One pass
-    /// finds the count, the extreme row and every row at or above the threshold of the rows expected to be screened; the threshold grows with the count, so when at least that many are screened those rows hold every
-    /// row named, and otherwise a second pass at the true threshold finds them.</summary>
+    /// finds the count, the extreme row and every row at or above the threshold of the rows expected to be screened;
+    /// the threshold grows with the count, so when at least that many are screened those rows hold every row named,
+    /// and otherwise a second pass at the true threshold finds them.</summary>
     /// <param name="leverageOneRows">Rows whose leverage is not below one: the others are expected to be screened.</param>
     public IReadOnlyList<(int Row, double T, double PAdjusted)> ScreenExternal(int residualDf, int leverageOneRows, out int screened)
     {

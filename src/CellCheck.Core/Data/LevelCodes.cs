@@ -8,7 +8,7 @@ namespace CellCheck.Core.Data;
 /// stored plus one (zero for a missing level) in the narrow forms. Ten million rows of a factor with a few dozen
 /// levels take 10 MB instead of 40.
 /// </summary>
-public sealed class LevelCodes
+public sealed class LevelCodes : IRowValues
 {
     private readonly byte[]? _bytes;
     private readonly ushort[]? _shorts;
@@ -110,28 +110,10 @@ public sealed class LevelCodes
     }
 
     /// <summary>The codes at <paramref name="rows"/>, as a new array.</summary>
-    public int[] Gather(ReadOnlySpan<int> rows)
-    {
-        var result = new int[rows.Length];
-        for (var k = 0; k < rows.Length; k++)
-        {
-            result[k] = this[rows[k]];
-        }
-
-        return result;
-    }
+    public int[] Gather(ReadOnlySpan<int> rows) => RowValues.Gather(this, rows);
 
     /// <summary>Every row's code, as a new array.</summary>
-    public int[] ToArray()
-    {
-        var result = new int[Length];
-        for (var i = 0; i < result.Length; i++)
-        {
-            result[i] = this[i];
-        }
-
-        return result;
-    }
+    public int[] ToArray() => RowValues.All(this);
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)]
     private static int Checked(int code, int levels, int[]? remap)

@@ -5,7 +5,7 @@ namespace CellCheck.Core.Data;
 /// last row, so the lines are consecutive: those are held as their first line and count (no array; ten million rows
 /// would otherwise take 40 MB); any other lines as an array.
 /// </summary>
-public sealed class LineNumbers
+public sealed class LineNumbers : IRowValues
 {
     private readonly int[]? _lines;
     private readonly int _first;
@@ -44,26 +44,8 @@ public sealed class LineNumbers
     }
 
     /// <summary>The lines of <paramref name="rows"/>, as a new array.</summary>
-    public int[] Gather(ReadOnlySpan<int> rows)
-    {
-        var result = new int[rows.Length];
-        for (var k = 0; k < rows.Length; k++)
-        {
-            result[k] = this[rows[k]];
-        }
-
-        return result;
-    }
+    public int[] Gather(ReadOnlySpan<int> rows) => RowValues.Gather(this, rows);
 
     /// <summary>Every row's line, as a new array.</summary>
-    public int[] ToArray()
-    {
-        var result = new int[Length];
-        for (var i = 0; i < result.Length; i++)
-        {
-            result[i] = this[i];
-        }
-
-        return result;
-    }
+    public int[] ToArray() => RowValues.All(this);
 }

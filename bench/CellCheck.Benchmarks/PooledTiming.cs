@@ -28,7 +28,7 @@ internal static class PooledTiming
                 clock.Restart();
             }
 
-            RadixSort.Sort(values);
+            RadixSort.Sort(values, values.Length);
             Mark("sort");
             _ = Moments.Summarize(values);
             Mark("moments");

@@ -42,7 +42,7 @@ internal static class PooledChecks
                 + "Judge by Anderson-Darling, D'Agostino-Pearson and the size of skewness and kurtosis.");
         }
 
-        RadixSort.Sort(span); // once for all three tests (each would sort its own copy)
+        RadixSort.Sort(values, span.Length); // once for all three tests (each would sort its own copy)
         var moments = Moments.Summarize(span);
         var shapiroWilk = ShapiroWilk.TestSorted(span);
         var dagostino = DagostinoPearson.Test(span);

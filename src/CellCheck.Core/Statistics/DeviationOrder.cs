@@ -47,7 +47,7 @@ internal sealed class DeviationOrder
         var packed = GC.AllocateUninitializedArray<ulong>(part.Count - zeros - small);
         var bucketStarts = layout.Scatter(part, centres, tally, smallKeys, smallGroups, packed);
         smallKeys.AsSpan(zeros).Sort(smallGroups.AsSpan(zeros));
-        BucketSort.Run(packed, bucketStarts);
+        BucketSort.Run(() => packed, bucketStarts);
         return new DeviationOrder(smallKeys, smallGroups, packed, bucketStarts, layout.KeyLow, layout.Shift, layout.GroupBits);
     }
 

@@ -4,10 +4,11 @@ using System.Runtime.InteropServices;
 namespace CellCheck.Core.Statistics;
 
 /// <summary>
-/// Ascending sort of doubles (optionally carrying an int payload) by least-significant-digit radix sort on the
-/// order-preserving bit pattern of each value (sign bit flipped for positives, all bits for negatives; Knuth, TAOCP
-/// vol. 3, §5.2.5), six passes of 11 bits (histograms from one read), a pass skipped when every value shares its digit. Stable; linear time;
-/// used above <see cref="Threshold"/> values, where it is several times faster than the comparison sort. No NaN.
+/// Ascending sort of doubles by radix sorting on the order-preserving bit pattern of each value (sign bit flipped for
+/// positives, all bits for negatives; Knuth, TAOCP vol. 3, §5.2.5), used above <see cref="Threshold"/> values, where it
+/// is several times faster than the comparison sort: the values alone in place through <see cref="FlagSort"/>; with an
+/// int payload, or as keys with their order, by least-significant-digit passes of 11 bits (histograms from one read, a
+/// pass skipped when every value shares its digit; stable). Linear time. No NaN.
 /// </summary>
 internal static class RadixSort
 {
@@ -44,15 +45,40 @@ internal static class RadixSort
             return;
         }
 
-        // the keys are written over the values themselves (each read before it is overwritten); each half is sorted
-        // through one spare buffer of half the length, then the halves are merged through it: half a copy, not a whole
+        SortLong(values, null);
+    }
+
+    /// <summary>Sorts the first <paramref name="length"/> values of <paramref name="values"/>, a long sample's buckets side by side.</summary>
+    public static void Sort(double[] values, int length)
+    {
+        if (length < Threshold)
+        {
+            Sort(values.AsSpan(0, length));
+            return;
+        }
+
+        SortLong(values.AsSpan(0, length), () => MemoryMarshal.Cast<double, ulong>(values.AsSpan(0, length)));
+    }
+
+    /// <summary>The keys are written over the values themselves (each read before it is overwritten) and sorted there
+    /// by <see cref="FlagSort"/>, which needs no copy; <paramref name="shared"/> gives the same keys to its workers.</summary>
+    private static void SortLong(Span<double> values, KeySpan? shared)
+    {
         var keys = MemoryMarshal.Cast<double, ulong>(values);
         for (var i = 0; i < values.Length; i++)
         {
             keys[i] = Key(values[i]);
         }
 
-        RadixHalves.Sort(keys);
+        if (shared is null)
+        {
+            FlagSort.Sort(keys);
+        }
+        else
+        {
+            FlagSort.Sort(shared);
+        }
+
         for (var i = 0; i < values.Length; i++)
         {
             values[i] = Value(keys[i]);

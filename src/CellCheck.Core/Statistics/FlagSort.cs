@@ -1,0 +1,60 @@
+namespace CellCheck.Core.Statistics;
+
+/// <summary>
+/// In-place ascending sort of the order-preserving keys of <see cref="RadixSort"/> without a spare copy: the keys are
+/// distributed in place over buckets of their leading bits by one American flag pass (McIlroy, Bostic &amp; McIlroy
+/// 1993, "Engineering radix sort", Computing Systems 6, 5-27: each bucket's unplaced keys are swapped along cycles to
+/// their buckets), then each bucket is sorted on its own, in cache. The buckets follow <see cref="KeyBuckets"/>: about
+/// 400 an octave over the twenty octaves below the largest magnitude, on each side of zero, and one bucket for the
+/// smaller magnitudes, so long tails do not crowd the bulk of the values into a few buckets.
+/// </summary>
+internal static class FlagSort
+{
+    /// <summary>Sorts <paramref name="keys"/> (buckets one after another).</summary>
+    public static void Sort(Span<ulong> keys)
+    {
+        var starts = Distribute(keys);
+        BucketSort.Sort(keys, starts, 0, starts.Length - 1, new ulong[BucketSort.Longest(starts)]);
+    }
+
+    /// <summary>Sorts the keys <paramref name="keys"/> gives (buckets side by side).</summary>
+    public static void Sort(KeySpan keys) => BucketSort.Run(keys, Distribute(keys()));
+
+    /// <summary>Moves every key into its bucket; returns where each bucket starts, and the end.</summary>
+    private static int[] Distribute(Span<ulong> keys)
+    {
+        var buckets = KeyBuckets.For(keys);
+        var starts = new int[buckets.Count + 1];
+        foreach (var key in keys)
+        {
+            starts[buckets.Of(key) + 1]++;
+        }
+
+        for (var b = 0; b < buckets.Count; b++)
+        {
+            starts[b + 1] += starts[b];
+        }
+
+        var next = starts.AsSpan(0, buckets.Count).ToArray();
+        for (var b = 0; b < buckets.Count; b++)
+        {
+            var end = starts[b + 1];
+            while (next[b] < end)
+            {
+                var key = keys[next[b]];
+                var home = buckets.Of(key);
+                while (home != b)
+                {
+                    // the key goes to the next open place of its bucket; the key found there moves on
+                    (key, keys[next[home]]) = (keys[next[home]], key);
+                    next[home]++;
+                    home = buckets.Of(key);
+                }
+
+                keys[next[b]++] = key;
+            }
+        }
+
+        return starts;
+    }
+}

@@ -26,6 +26,7 @@ public static class ResponseAnalyzer
         var source = ResidualSources.For(data, spec, ModelName(data, spec));
         var residuals = source.Compute(partition);
         var rows = partition.Values.Count;
+        WorkingMemory.Compact(rows);
         // the groups of checks are independent given the residuals: run them side by side (each writes only its own result)
         List<CellResult> cells = null!;
         SpreadResult spread = null!;

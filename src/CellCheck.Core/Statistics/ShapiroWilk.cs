@@ -148,19 +148,27 @@ public static class ShapiroWilk
             : new TestOutcome(w, PValue(w, n));
     }
 
-    private static double Statistic(ReadOnlySpan<double> x)
+    /// <summary>Σ aᵢ dᵢ over the stored half vector <paramref name="a"/>.</summary>
+    internal static double Numerator(double[] a, ReadOnlySpan<double> x, double range)
     {
         var n = x.Length;
-        var a = ShapiroWilkCoefficients.Shared(n);
-        var range = x[^1] - x[0];
-
-        // Numerator: the weights are antisymmetric, so Σ aᵢ x₍ᵢ₎ pairs opposite order statistics; their differences
-        // do not depend on location, so no centring is needed here.
         var b = 0.0;
         for (var i = 0; i < a.Length; i++)
         {
             b += a[i] * ((x[n - 1 - i] - x[i]) / range);
         }
+
+        return b;
+    }
+
+    private static double Statistic(ReadOnlySpan<double> x)
+    {
+        var n = x.Length;
+        var range = x[^1] - x[0];
+
+        // Numerator: the weights are antisymmetric, so Σ aᵢ x₍ᵢ₎ pairs opposite order statistics; their differences
+        // do not depend on location, so no centring is needed here. Above the cache limit the weights are not stored.
+        var b = n > ShapiroWilkCoefficients.CacheLimit ? ShapiroWilkCoefficients.Numerator(x, range) : Numerator(ShapiroWilkCoefficients.Shared(n), x, range);
 
         // Denominator: corrected two-pass sum of squares of the centred, range-scaled values.
         var centre = Descriptive.Mean(x);

@@ -100,6 +100,56 @@ internal static class ShapiroWilkCoefficients
         return a;
     }
 
+    /// <summary>Positions of the half vector scored at a time by <see cref="Numerator"/>.</summary>
+    private const int ScoreChunk = 1 << 18;
+
+    /// <summary>
+    /// Σ a_i d_i over the half vector of n &gt; <see cref="CacheLimit"/> sorted values <paramref name="x"/>, for the
+    /// range-scaled differences d_i = (x₍ₙ₋ᵢ₎ − x₍ᵢ₊₁₎) / <paramref name="range"/> of opposite order statistics, without
+    /// storing the vector (40 MB at ten million values): the Blom scores are made a chunk at a time,
+    /// side by side, and summed into Σ m² and Σ_{i≥2} m_i d_i in one pass (Neumaier's compensation); then Σ a_i d_i = a_n d_0 + a_(n−1) d_1 +
+    /// Σ_{i≥2} m_i d_i / √φ with a_n, a_(n−1) and φ formed as in <see cref="Compute"/>. The same sum as over the stored
+    /// weights up to the rounding of that plain sum (the common factor 1/√φ is applied once, not to each weight).
+    /// </summary>
+    internal static double Numerator(ReadOnlySpan<double> x, double range)
+    {
+        var n = x.Length;
+        var half = n / 2;
+        var scores = new double[Math.Min(ScoreChunk, half)];
+        var (squares, inner) = (default(NeumaierSum), default(NeumaierSum));
+        double m0 = 0.0, m1 = 0.0;
+        for (var start = 0; start < half; start += ScoreChunk)
+        {
+            var count = Math.Min(ScoreChunk, half - start);
+            var first = start;
+            GroupChunks.ForEachRange(count, (from, to) =>
+            {
+                for (var i = from; i < to; i++)
+                {
+                    scores[i] = Score(first + i, n);
+                }
+            });
+
+            for (var i = 0; i < count; i++)
+            {
+                var m = scores[i];
+                squares.Add(m * m);
+                var j = start + i;
+                inner.Add(j >= 2 ? m * ((x[n - 1 - j] - x[j]) / range) : 0.0);
+            }
+
+            (m0, m1) = start == 0 ? (scores[0], scores[1]) : (m0, m1);
+        }
+
+        var sumSquares = 2.0 * squares.Value;
+        var norm = Math.Sqrt(sumSquares);
+        var u = 1.0 / Math.Sqrt(n);
+        var a0 = (m0 / norm) + Polynomial.Evaluate(Last, u);
+        var a1 = (m1 / norm) + Polynomial.Evaluate(NextToLast, u);
+        var phi = (sumSquares - (2.0 * m0 * m0) - (2.0 * m1 * m1)) / (1.0 - (2.0 * a0 * a0) - (2.0 * a1 * a1));
+        return (a0 * ((x[n - 1] - x[0]) / range)) + (a1 * ((x[n - 2] - x[1]) / range)) + (inner.Value / Math.Sqrt(phi));
+    }
+
     /// <summary>The Blom score of the (i + 1)-th largest of n, −Φ⁻¹((i + 1 − 3/8)/(n + 1/4)).</summary>
     private static double Score(int i, int n) => -StandardNormal.Quantile((i + 1 - 0.375) / (n + 0.25));
 }

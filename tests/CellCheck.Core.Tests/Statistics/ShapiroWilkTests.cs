@@ -132,6 +132,22 @@ public sealed class ShapiroWilkTests
         Close.Relative(0.9976249933242798, outcome.Statistic, 1e-5);
     }
 
+    [Theory]
+    [InlineData(5001)]
+    [InlineData(20_000)]
+    [InlineData(300_001)]
+    public void Above_the_cache_limit_the_unstored_weights_give_the_numerator_of_the_stored_ones(int n)
+    {
+        // the same weights, the common factor 1/√φ applied once instead of to each, the sum compensated: equal up to the
+        // rounding of the stored weights' plain sum of n/2 products of one sign, at most about (n/2)·ε relative
+        // (Higham 2002, Accuracy and Stability of Numerical Algorithms, §4.2)
+        var random = new Random(n);
+        var x = Enumerable.Range(0, n).Select(_ => random.NextDouble() - random.NextDouble()).Order().ToArray();
+        var range = x[^1] - x[0];
+        var stored = ShapiroWilk.Numerator(ShapiroWilkCoefficients.Compute(n), x, range);
+        Assert.Equal(stored, ShapiroWilkCoefficients.Numerator(x, range), Math.Abs(stored) * (n / 2) * 2.220446049250313e-16);
+    }
+
     [Fact]
     public void Shapiro_wilk_needs_three_values()
     {

@@ -40,12 +40,12 @@ internal sealed class DeviationOrder
     public static DeviationOrder Sort(GroupedValues part, double[] centres, bool everyKeyKept = false)
     {
         var layout = DeviationLayout.For(part, centres, everyKeyKept, Octaves, BucketBits);
-        var tally = layout.Count(part, centres);
+        var tally = DeviationPasses.Count(layout, part, centres);
         var (zeros, small) = (tally.Zeros.Sum(), tally.Small.Sum());
         var smallKeys = GC.AllocateUninitializedArray<ulong>(zeros + small);
         var smallGroups = GC.AllocateUninitializedArray<int>(zeros + small);
         var packed = GC.AllocateUninitializedArray<ulong>(part.Count - zeros - small);
-        var bucketStarts = layout.Scatter(part, centres, tally, smallKeys, smallGroups, packed);
+        var bucketStarts = DeviationPasses.Scatter(layout, part, centres, tally, smallKeys, smallGroups, packed);
         smallKeys.AsSpan(zeros).Sort(smallGroups.AsSpan(zeros));
         BucketSort.Run(() => packed, bucketStarts);
         return new DeviationOrder(smallKeys, smallGroups, packed, bucketStarts, layout.KeyLow, layout.Shift, layout.GroupBits);

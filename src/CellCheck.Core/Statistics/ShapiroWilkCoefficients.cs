@@ -106,10 +106,11 @@ internal static class ShapiroWilkCoefficients
     /// <summary>
     /// Σ a_i d_i over the half vector of n &gt; <see cref="CacheLimit"/> sorted values <paramref name="x"/>, for the
     /// range-scaled differences d_i = (x₍ₙ₋ᵢ₎ − x₍ᵢ₊₁₎) / <paramref name="range"/> of opposite order statistics, without
-    /// storing the vector (40 MB at ten million values): the Blom scores are made a chunk at a time,
-    /// side by side, and summed into Σ m² and Σ_{i≥2} m_i d_i in one pass (Neumaier's compensation); then Σ a_i d_i = a_n d_0 + a_(n−1) d_1 +
-    /// Σ_{i≥2} m_i d_i / √φ with a_n, a_(n−1) and φ formed as in <see cref="Compute"/>. The same sum as over the stored
-    /// weights up to the rounding of that plain sum (the common factor 1/√φ is applied once, not to each weight).
+    /// storing the vector (40 MB at ten million values): the Blom scores are made a chunk at a time, side by side, and
+    /// summed into Σ m² and Σ_{i≥2} m_i d_i in one pass (Neumaier's compensation); then
+    /// Σ a_i d_i = a_n d_0 + a_(n−1) d_1 + Σ_{i≥2} m_i d_i / √φ with a_n, a_(n−1) and φ formed as in <see cref="Compute"/>.
+    /// The same sum as over the stored weights up to the rounding of that plain sum (the common factor 1/√φ is applied
+    /// once, not to each weight).
     /// </summary>
     internal static double Numerator(ReadOnlySpan<double> x, double range)
     {

@@ -70,8 +70,18 @@ public static class GroupedDurbinWatson
 
     /// <summary>tr(MA), tr((MA)²) and the number of groups present, for M the residual projector of the group indicators.
     /// One pass in run order gathers b_c and ‖A1_c‖² per group and buckets every step between two groups under the lower
-    /// one (so each group's memory is touched, never the run sequence at random); a second pass counts the steps per pair.</summary>
-    internal static (double TraceMA, double TraceMA2, int Groups) Traces(ReadOnlySpan<int> group, int groups)
+    /// one (so each group's memory is touched, never the run sequence at random); further passes, one per range of lower
+    /// groups whose steps fit in <see cref="PartnerRange"/>, list those steps and count them per pair, in group order.</summary>
+    internal static (double TraceMA, double TraceMA2, int Groups) Traces(ReadOnlySpan<int> group, int groups) =>
+        Traces(group, groups, PartnerRange);
+
+    /// <summary>Most steps between groups listed at once (16 MB): a run sequence of ten million values in ten thousand
+    /// cells has about as many steps, which took 40 MB listed all together.</summary>
+    private const int PartnerRange = 1 << 22;
+
+    /// <summary>As <see cref="Traces(ReadOnlySpan{int}, int)"/>, listing at most <paramref name="partnerRange"/> steps at a
+    /// time (more when one group alone has more): the same traces, bit for bit, whatever the range.</summary>
+    internal static (double TraceMA, double TraceMA2, int Groups) Traces(ReadOnlySpan<int> group, int groups, int partnerRange)
     {
         var n = group.Length;
         var size = new int[groups];
@@ -111,47 +121,67 @@ public static class GroupedDurbinWatson
             bucket[g + 1] += bucket[g];
         }
 
-        var partner = new int[bucket[groups]];
-        var next = bucket[..^1];
-        for (var t = 1; t < n; t++)
-        {
-            var (a, b) = (group[t - 1], group[t]);
-            if (a != b)
-            {
-                partner[next[Math.Min(a, b)]++] = Math.Max(a, b);
-            }
-        }
-
+        // the steps between groups listed under the lower group, for a range of lower groups at a time (one more pass
+        // over the run sequence a range), so the list holds at most PartnerRange steps however long the sequence
         double traceHA = 0, traceHA2 = 0, traceHAHA = 0;
         var p = 0;
         var between = new int[groups];
-        for (var c = 0; c < groups; c++)
+        var largest = 1;
+        for (var g = 0; g < groups; g++)
         {
-            if (size[c] == 0)
+            largest = Math.Max(largest, bucket[g + 1] - bucket[g]);
+        }
+
+        var partner = new int[Math.Min(Math.Max(1, bucket[groups]), Math.Max(largest, partnerRange))];
+        for (var first = 0; first < groups;)
+        {
+            var end = first + 1;
+            while (end < groups && bucket[end + 1] - bucket[first] <= partner.Length)
             {
-                continue;
+                end++;
             }
 
-            p++;
-            traceHA += (double)boundary[c] / size[c];
-            traceHA2 += (double)squares[c] / size[c];
-            traceHAHA += (double)boundary[c] * boundary[c] / ((double)size[c] * size[c]);
-            var steps = partner.AsSpan(bucket[c], bucket[c + 1] - bucket[c]);
-            foreach (var other in steps)
+            var next = bucket[first..end];
+            for (var t = 1; t < n; t++)
             {
-                between[other]++;
-            }
-
-            // each pair of distinct groups appears twice in Σ_{c,c'} (1_cᵀA1_c')²/(n_c n_c')
-            foreach (var other in steps)
-            {
-                var k = between[other];
-                if (k > 0)
+                var (a, b) = (group[t - 1], group[t]);
+                var lower = Math.Min(a, b);
+                if (a != b && lower >= first && lower < end)
                 {
-                    traceHAHA += 2.0 * k * k / ((double)size[c] * size[other]);
-                    between[other] = 0;
+                    partner[next[lower - first]++ - bucket[first]] = Math.Max(a, b);
                 }
             }
+
+            for (var c = first; c < end; c++)
+            {
+                if (size[c] == 0)
+                {
+                    continue;
+                }
+
+                p++;
+                traceHA += (double)boundary[c] / size[c];
+                traceHA2 += (double)squares[c] / size[c];
+                traceHAHA += (double)boundary[c] * boundary[c] / ((double)size[c] * size[c]);
+                var steps = partner.AsSpan(bucket[c] - bucket[first], bucket[c + 1] - bucket[c]);
+                foreach (var other in steps)
+                {
+                    between[other]++;
+                }
+
+                // each pair of distinct groups appears twice in Σ_{c,c'} (1_cᵀA1_c')²/(n_c n_c')
+                foreach (var other in steps)
+                {
+                    var k = between[other];
+                    if (k > 0)
+                    {
+                        traceHAHA += 2.0 * k * k / ((double)size[c] * size[other]);
+                        between[other] = 0;
+                    }
+                }
+            }
+
+            first = end;
         }
 
         var traceMA = (2.0 * (n - 1)) - traceHA;

@@ -45,4 +45,22 @@ public sealed class GroupedDurbinWatsonTests
         Assert.Equal(dense.P, grouped.P, 1e-10 * Math.Max(dense.P, 1e-300));
         Assert.Equal(dense.Method, grouped.Method);
     }
+
+    [Theory]
+    [InlineData(1)]
+    [InlineData(7)]
+    [InlineData(1000)]
+    public void Listing_the_steps_between_groups_a_range_at_a_time_gives_the_same_traces_bit_for_bit(int partnerRange)
+    {
+        // a range smaller than one group's steps (1), a few groups a range (7 to 1000) and everything at once
+        var random = new Random(partnerRange);
+        var group = Enumerable.Range(0, 20_000).Select(t => t % 50 < 10 ? 3 : random.Next(40)).ToArray();
+        group[100] = 39;
+        var whole = GroupedDurbinWatson.Traces(group, 41, int.MaxValue);
+        var ranged = GroupedDurbinWatson.Traces(group, 41, partnerRange);
+        Assert.Equal(BitConverter.DoubleToInt64Bits(whole.TraceMA), BitConverter.DoubleToInt64Bits(ranged.TraceMA));
+        Assert.Equal(BitConverter.DoubleToInt64Bits(whole.TraceMA2), BitConverter.DoubleToInt64Bits(ranged.TraceMA2));
+        Assert.Equal(whole.Groups, ranged.Groups);
+        Assert.Equal(40, whole.Groups); // group 40 is empty
+    }
 }

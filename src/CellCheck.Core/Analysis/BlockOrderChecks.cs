@@ -7,7 +7,7 @@ namespace CellCheck.Core.Analysis;
 /// block's residuals in run order.</summary>
 internal static class BlockOrderChecks
 {
-    public static List<BlockOrderResult> Run(DesignData data, int[]? rows, double[] e, double[] t, double alpha)
+    public static List<BlockOrderResult> Run(DesignData data, RunRows rows, double[] e, double[] t, double alpha)
     {
         var result = new List<BlockOrderResult>();
         var block = data.Blocks[0];
@@ -18,8 +18,8 @@ internal static class BlockOrderChecks
         var first = new int[levels];
         for (var k = 0; k < e.Length; k++)
         {
-            var code = codes[rows?[k] ?? k];
-            contiguous &= k == 0 || code == codes[rows?[k - 1] ?? (k - 1)] || counts[code + 1] == 0;
+            var code = codes[rows[k]];
+            contiguous &= k == 0 || code == codes[rows[k - 1]] || counts[code + 1] == 0;
             first[code] = counts[code + 1] == 0 ? k : first[code];
             counts[code + 1]++;
         }
@@ -35,7 +35,7 @@ internal static class BlockOrderChecks
         var next = (int[])counts.Clone();
         for (var k = 0; k < e.Length && !contiguous; k++)
         {
-            var at = next[codes[rows?[k] ?? k]]++;
+            var at = next[codes[rows[k]]]++;
             eb[at] = e[k];
             tb[at] = t[k];
         }

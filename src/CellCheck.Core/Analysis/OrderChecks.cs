@@ -32,13 +32,13 @@ internal static class OrderChecks
         }
 
         // every row used in file order (logged data): the run positions are the column itself, not a copy
-        var t = rows is null ? order : new double[use.Length];
+        var t = rows.IsIdentity ? order : new double[use.Length];
         var e = new double[use.Length];
         var grouped = residuals.Residuals;
         var ties = 0;
         for (var k = 0; k < use.Length; k++)
         {
-            if (rows is not null)
+            if (!rows.IsIdentity)
             {
                 t[k] = order[rows[k]];
             }
@@ -82,7 +82,7 @@ internal static class OrderChecks
     /// O(n) moments of a group-indicator design; otherwise on the fitted design matrix; null when that is too large.
     /// The residuals are gathered already, so the cell-based tests write the cells over <paramref name="use"/> and the
     /// first block's contrast columns over <paramref name="spare"/> (both free by then) instead of two fresh arrays.</summary>
-    private static DurbinWatsonResult? DurbinWatsonOf(DesignData data, CellPartition partition, ResidualSet residuals, int[] use, int[]? rows, int[] spare, double[] e)
+    private static DurbinWatsonResult? DurbinWatsonOf(DesignData data, CellPartition partition, ResidualSet residuals, int[] use, RunRows rows, int[] spare, double[] e)
     {
         if (residuals.Diagnostics!.Absorbed is { } absorbed)
         {
@@ -97,7 +97,7 @@ internal static class OrderChecks
                 var run = dummyRun[j] = j == 0 ? spare : new int[e.Length];
                 for (var k = 0; k < e.Length; k++)
                 {
-                    run[k] = contrast[codes[rows?[k] ?? k]];
+                    run[k] = contrast[codes[rows[k]]];
                 }
             }
 

@@ -12,10 +12,10 @@ namespace CellCheck.Core.Analysis;
 internal static class RunSequence
 {
     /// <param name="leverage">Leverage of each row in grouped order; null when no row has leverage one.</param>
-    /// <returns>The grouped positions and data rows of the used rows in run order (rows null when every row is used in
-    /// file order: run position k is data row k), the number of rows without a run position, and a working array of
+    /// <returns>The grouped positions and data rows of the used rows in run order (no list of rows when every row is used
+    /// in file order: run position k is data row k), the number of rows without a run position, and a working array of
     /// one int a data row that the caller may overwrite.</returns>
-    public static (int[] Use, int[]? Rows, int Missing, int[] Spare) UsedRows(double[] order, CellPartition partition, double[]? leverage)
+    public static (int[] Use, RunRows Rows, int Missing, int[] Spare) UsedRows(double[] order, CellPartition partition, double[]? leverage)
     {
         var rows = order.Length;
         var grouped = new int[rows];
@@ -64,7 +64,7 @@ internal static class RunSequence
         {
             // every row used, in file order (logged data): the run sequence is the rows themselves, and the grouped
             // position of each row is the array just filled; only the working array is new
-            return (grouped, null, missing, GC.AllocateUninitializedArray<int>(rows));
+            return (grouped, new RunRows(null), missing, GC.AllocateUninitializedArray<int>(rows));
         }
 
         var sequence = new int[count];
@@ -87,7 +87,7 @@ internal static class RunSequence
             use[k] = grouped[sequence[k]];
         }
 
-        return (use, sequence, missing, grouped);
+        return (use, new RunRows(sequence), missing, grouped);
     }
 
     private static void Collect(int[] grouped, int[] rowsInOrder)

@@ -34,6 +34,22 @@ public sealed class RunSequenceTests
             .OrderBy(i => order[partition.RowOrder[i]]).ThenBy(i => partition.RowOrder[i]).ToArray();
         Assert.Equal(1, missing);
         Assert.Equal(expected, use);
-        Assert.Equal(expected.Select(i => partition.RowOrder[i]).ToArray(), rows);
+        Assert.Equal(expected.Select(i => partition.RowOrder[i]).ToArray(), rows.ToArray(use.Length));
+    }
+
+    [Fact]
+    public void Every_row_used_in_file_order_is_its_own_run_position_without_a_list()
+    {
+        const int n = 300;
+        var random = new Random(3);
+        var factor = new FactorColumn("f", ["a", "b", "c"], Enumerable.Range(0, n).Select(_ => random.Next(3)).ToArray());
+        var partition = CellPartition.Build([factor], Enumerable.Range(0, n).Select(i => (double)i).ToArray());
+        var order = Enumerable.Range(0, n).Select(i => 10.0 + i).ToArray();
+        var (use, rows, missing, _) = RunSequence.UsedRows(order, partition, null);
+        Assert.True(rows.IsIdentity);
+        Assert.Equal(0, missing);
+        Assert.Equal(Enumerable.Range(0, n), rows.ToArray(n));
+        Assert.All(Enumerable.Range(0, n), k => Assert.Equal(k, partition.RowOrder[use[k]]));
+        Assert.Equal(n - 1, rows[n - 1]);
     }
 }

@@ -25,7 +25,7 @@ public static class CellBlockDurbinWatson
     {
         var n = residuals.Length;
         (double TraceMA, double TraceMA2, int Groups) traces = default;
-        var tracing = Task.Run(() => traces = GroupedDurbinWatson.Traces(cell, cells));
+        var tracing = Task.Run(() => traces = GroupTraces.Of(cell, cells));
         var centred = new CentredBlockColumns(cells, p);
         Span<int> columns = stackalloc int[dummy.Length];
         for (var t = 0; t < n; t++)

@@ -75,7 +75,7 @@ public static class PooledPlot
             keys[k] = rows.Studentized[finite[k]];
         }
 
-        RadixSort.Sort(keys, order); // stable: ties stay in row order
+        RadixOrder.Sort(keys, order); // stable: ties stay in row order
         var n = keys.Length;
         var text = AssumptionLines(report.Verdict, AssumptionNames.Normality);
         var mark = Mark(report.Verdict, AssumptionNames.Normality);
@@ -175,7 +175,7 @@ public static class PooledPlot
 
         var placed = finite.Where(i => double.IsFinite(runOrder[i])).ToArray();
         var positions = placed.Select(i => runOrder[i]).ToArray();
-        RadixSort.Sort(positions, placed); // stable: shared run positions stay in row order
+        RadixOrder.Sort(positions, placed); // stable: shared run positions stay in row order
         if (placed.Length < finite.Length)
         {
             notes.Add(NumberText.Count(finite.Length - placed.Length) + " row(s) without a run position are not in the run-order panel.");

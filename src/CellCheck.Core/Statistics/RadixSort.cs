@@ -6,9 +6,8 @@ namespace CellCheck.Core.Statistics;
 /// <summary>
 /// Ascending sort of doubles by radix sorting on the order-preserving bit pattern of each value (sign bit flipped for
 /// positives, all bits for negatives; Knuth, TAOCP vol. 3, §5.2.5), used above <see cref="Threshold"/> values, where it
-/// is several times faster than the comparison sort: the values alone in place through <see cref="FlagSort"/>; with an
-/// int payload, or as keys with their order, by least-significant-digit passes of 11 bits (histograms from one read, a
-/// pass skipped when every value shares its digit; stable). Linear time. No NaN.
+/// is several times faster than the comparison sort: the values in place through <see cref="FlagSort"/> (with their
+/// positions: <see cref="RadixOrder"/>). Linear time. No NaN.
 /// </summary>
 internal static class RadixSort
 {
@@ -83,88 +82,6 @@ internal static class RadixSort
         {
             values[i] = Value(keys[i]);
         }
-    }
-
-    /// <summary>Sorts <paramref name="values"/> and applies the same permutation to <paramref name="payload"/> (stable).</summary>
-    public static void Sort(Span<double> values, Span<int> payload)
-    {
-        if (values.Length < Threshold)
-        {
-            var k = values.ToArray();
-            var p = payload.ToArray();
-            Array.Sort(k, p);
-            k.CopyTo(values);
-            p.CopyTo(payload);
-            return;
-        }
-
-        var keys = new ulong[values.Length];
-        var spare = new ulong[values.Length];
-        var carried = new int[values.Length];
-        var source = new int[values.Length];
-        {
-            for (var i = 0; i < values.Length; i++)
-            {
-                keys[i] = Key(values[i]);
-            }
-
-            payload.CopyTo(source);
-            var inSpare = RadixPasses.Run<WideDigit>(keys, spare, source, carried, values.Length);
-            var (sortedKeys, sortedPayload) = inSpare ? (spare, carried) : (keys, source);
-            for (var i = 0; i < values.Length; i++)
-            {
-                values[i] = Value(sortedKeys[i]);
-            }
-
-            sortedPayload.AsSpan(0, values.Length).CopyTo(payload);
-        }
-    }
-
-    /// <summary>The order-preserving keys of <paramref name="values"/>, sorted, and in <paramref name="order"/> the index of
-    /// each sorted key's value (stable above the threshold; below it, equal values may come in any order). Read a
-    /// sorted value back with <see cref="ValueOf"/>. Allocates only the two buffers of the passes and the order.</summary>
-    public static ulong[] SortedKeys(ReadOnlySpan<double> values, out int[] order)
-    {
-        var keys = new ulong[values.Length];
-        for (var i = 0; i < keys.Length; i++)
-        {
-            keys[i] = Key(values[i]);
-        }
-
-        return SortKeys(keys, out order, out _);
-    }
-
-    /// <summary>As <see cref="SortedKeys(ReadOnlySpan{double}, out int[])"/> on keys already made by <see cref="KeyOf"/>:
-    /// <paramref name="keys"/> serves as one of the two buffers of the passes, and <paramref name="free"/> is the other
-    /// (null below the threshold), no longer needed once the sort returns.</summary>
-    public static ulong[] SortKeys(ulong[] keys, out int[] order, out ulong[]? free)
-    {
-        var n = keys.Length;
-        // every buffer below is written in full before it is read: no need for the allocator to clear them first
-        order = GC.AllocateUninitializedArray<int>(n);
-        for (var i = 0; i < n; i++)
-        {
-            order[i] = i;
-        }
-
-        if (n < Threshold)
-        {
-            Array.Sort(keys, order);
-            free = null;
-            return keys;
-        }
-
-        var spare = GC.AllocateUninitializedArray<ulong>(n);
-        var carried = GC.AllocateUninitializedArray<int>(n);
-        if (RadixPasses.Run<WideDigit>(keys, spare, order, carried, n))
-        {
-            order = carried;
-            free = keys;
-            return spare;
-        }
-
-        free = spare;
-        return keys;
     }
 
     /// <summary>The order-preserving key of a value (−0 sorts with +0).</summary>

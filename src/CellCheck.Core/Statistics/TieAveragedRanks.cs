@@ -14,7 +14,7 @@ internal static class TieAveragedRanks
     public static void Compute(ReadOnlySpan<double> x, Span<double> ranks, double tolerance, Func<double, double>? score)
     {
         var n = x.Length;
-        var keys = RadixSort.SortedKeys(x, out var order);
+        var keys = RadixOrder.SortedKeys(x, out var order);
         var start = 0;
         while (start < n)
         {

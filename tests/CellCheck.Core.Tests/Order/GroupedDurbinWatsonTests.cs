@@ -56,8 +56,8 @@ public sealed class GroupedDurbinWatsonTests
         var random = new Random(partnerRange);
         var group = Enumerable.Range(0, 20_000).Select(t => t % 50 < 10 ? 3 : random.Next(40)).ToArray();
         group[100] = 39;
-        var whole = GroupedDurbinWatson.Traces(group, 41, int.MaxValue);
-        var ranged = GroupedDurbinWatson.Traces(group, 41, partnerRange);
+        var whole = GroupTraces.Of(group, 41, int.MaxValue);
+        var ranged = GroupTraces.Of(group, 41, partnerRange);
         Assert.Equal(BitConverter.DoubleToInt64Bits(whole.TraceMA), BitConverter.DoubleToInt64Bits(ranged.TraceMA));
         Assert.Equal(BitConverter.DoubleToInt64Bits(whole.TraceMA2), BitConverter.DoubleToInt64Bits(ranged.TraceMA2));
         Assert.Equal(whole.Groups, ranged.Groups);

@@ -18,7 +18,7 @@ public sealed class RadixSortTests
 
         var keys = (double[])values.Clone();
         var payload = Enumerable.Range(0, n).ToArray();
-        RadixSort.Sort(keys, payload);
+        RadixOrder.Sort(keys, payload);
         Assert.Equal(expected, keys);
         var stable = Enumerable.Range(0, n).OrderBy(i => values[i]).ThenBy(i => i).ToArray();
         Assert.Equal(stable, payload);
@@ -26,11 +26,11 @@ public sealed class RadixSortTests
     }
 
     [Theory]
-    [InlineData(0)] // the halves are sorted apart and merged: even and odd lengths, all in one half, none in one
+    [InlineData(0)] // long samples of many ties, descending, ascending, and zeros of both signs
     [InlineData(1)]
     [InlineData(2)]
     [InlineData(3)]
-    public void Halves_sorted_apart_merge_into_the_comparison_sort_order(int shape)
+    public void Long_samples_of_ties_runs_and_signed_zeros_come_out_in_the_comparison_sort_order(int shape)
     {
         var random = new Random(11 + shape);
         var n = RadixSort.Threshold + 1 + (shape * 1001);
@@ -55,7 +55,7 @@ public sealed class RadixSortTests
         // both sides of the threshold (comparison sort below it, radix passes above); ties of rounded values included
         var random = new Random(n);
         var values = Enumerable.Range(0, n).Select(_ => Math.Round((random.NextDouble() - 0.5) * 2000) / 8).ToArray();
-        var keys = RadixSort.SortedKeys(values, out var order);
+        var keys = RadixOrder.SortedKeys(values, out var order);
         var sorted = keys.Select(RadixSort.ValueOf).ToArray();
         Assert.Equal(values.OrderBy(v => v).ToArray(), sorted);
         Assert.Equal(sorted, order.Select(i => values[i] == 0 ? 0.0 : values[i]).ToArray());
@@ -65,17 +65,14 @@ public sealed class RadixSortTests
     [Theory]
     [InlineData(5_000)]
     [InlineData(300_000)]
-    public void Keys_made_beforehand_sort_in_place_and_leave_the_other_buffer_free(int n)
+    public void Sorted_keys_fold_negative_zero_into_zero_and_keep_every_position(int n)
     {
         var random = new Random(n);
         var values = Enumerable.Range(0, n).Select(i => i % 11 == 0 ? -0.0 : Math.Round((random.NextDouble() - 0.5) * 4000) / 16).ToArray();
-        var keys = values.Select(RadixSort.KeyOf).ToArray();
-        var sorted = RadixSort.SortKeys(keys, out var order, out var free);
-        Assert.Equal(values.Select(v => v == 0 ? 0.0 : v).OrderBy(v => v).ToArray(), sorted.Select(RadixSort.ValueOf).ToArray());
+        var sorted = RadixOrder.SortedKeys(values, out var order);
+        Assert.Equal(values.Select(v => v == 0 ? 0.0 : v).OrderBy(v => v).Select(BitConverter.DoubleToInt64Bits), sorted.Select(k => BitConverter.DoubleToInt64Bits(RadixSort.ValueOf(k))));
         Assert.Equal(sorted.Select(RadixSort.ValueOf).ToArray(), order.Select(i => values[i] == 0 ? 0.0 : values[i]).ToArray());
         Assert.Equal(n, order.Distinct().Count());
-        Assert.Equal(n >= RadixSort.Threshold, free is not null);
-        Assert.NotSame(sorted, free);
     }
 
     [Fact]
@@ -89,5 +86,17 @@ public sealed class RadixSortTests
         var inPlace = (double[])values.Clone();
         TieAveragedRanks.Compute(inPlace, inPlace);
         Assert.Equal(separate, inPlace);
+    }
+
+    [Theory]
+    [InlineData(70_001)] // the halves sorted apart and merged (a bucket of crowded values): odd and even lengths
+    [InlineData(70_000)]
+    public void Keys_sorted_by_halves_merge_into_the_comparison_sort_order(int n)
+    {
+        var random = new Random(n);
+        var keys = Enumerable.Range(0, n).Select(i => i % 3 == 0 ? (ulong)random.Next(100) : (ulong)random.NextInt64()).ToArray();
+        var expected = keys.Order().ToArray();
+        RadixHalves.Sort(keys);
+        Assert.Equal(expected, keys);
     }
 }

@@ -59,4 +59,42 @@ public sealed class TextScanTests
         var fault = Scan(Encoding.ASCII.GetBytes("abc\r\n123456\n"), max: 5)!;
         Assert.Equal((TextFaultKind.LineTooLong, 2, (int?)null), (fault.Kind, fault.Line, fault.Column));
     }
+
+    [Fact]
+    public void Faults_after_read_buffers_of_lf_lines_are_located_exactly()
+    {
+        // 64 KiB buffers of LF lines are taken at once: the fault's line and column must be those of a byte-by-byte count
+        var text = new StringBuilder();
+        for (var i = 0; i < 20_000; i++)
+        {
+            text.Append(i).Append(",x,").Append(i % 7).Append('\n');
+        }
+
+        var lines = 20_000;
+        text.Append("ab");
+        var bytes = Encoding.ASCII.GetBytes(text.ToString()).Append((byte)0xE9).ToArray();
+        var fault = Scan(bytes)!;
+        Assert.Equal((TextFaultKind.Encoding, lines + 1, 3), (fault.Kind, fault.Line, fault.Column));
+        var nul = Scan(Encoding.ASCII.GetBytes(text.ToString()).Append((byte)0).ToArray())!;
+        Assert.Equal((TextFaultKind.NotText, lines + 1, 3), (nul.Kind, nul.Line, nul.Column));
+    }
+
+    [Fact]
+    public void A_line_over_the_limit_across_read_buffers_is_found_and_one_at_the_limit_is_not()
+    {
+        var head = string.Concat(Enumerable.Repeat("a,b\n", 30_000)); // 120 000 bytes of short lines first
+        Assert.Null(Scan(Encoding.ASCII.GetBytes(head + new string('z', 100_000) + "\nq\n"), max: 100_000));
+        var fault = Scan(Encoding.ASCII.GetBytes(head + new string('z', 100_001) + "\nq\n"), max: 100_000)!;
+        Assert.Equal((TextFaultKind.LineTooLong, 30_001, (int?)null), (fault.Kind, fault.Line, fault.Column));
+    }
+
+    [Fact]
+    public void A_crlf_split_across_read_buffers_counts_once_after_lf_lines()
+    {
+        // the CR is the last byte of the first 64 KiB buffer, its LF the first of the next
+        var first = new string('a', (1 << 16) - 3) + "\nb\r";
+        var bytes = Encoding.ASCII.GetBytes(first + "\nc\n").Append((byte)0xE9).ToArray();
+        var fault = Scan(bytes)!;
+        Assert.Equal((TextFaultKind.Encoding, 4, 1), (fault.Kind, fault.Line, fault.Column));
+    }
 }

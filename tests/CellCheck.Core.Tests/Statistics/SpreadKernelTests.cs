@@ -3,7 +3,8 @@ using CellCheck.Core.Tests.Support;
 
 namespace CellCheck.Core.Tests.Statistics;
 
-/// <summary>The five spread tests computed together equal each test computed alone from its own copies, bit for bit.</summary>
+/// <summary>The five spread tests computed together equal each test computed alone, bit for bit, and the separate
+/// computations from their own copies: bit for bit, and Fligner-Killeen to its summation's rounding (see Close).</summary>
 public sealed class SpreadKernelTests
 {
     [Theory]

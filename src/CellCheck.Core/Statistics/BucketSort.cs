@@ -11,16 +11,7 @@ internal static class BucketSort
     public static void Run(KeySpan keys, int[] starts)
     {
         var buckets = starts.Length - 1;
-        var bounds = new List<int> { 0 };
-        for (var b = 0; b < buckets; b++)
-        {
-            if (starts[b + 1] - starts[bounds[^1]] >= GroupChunks.ChunkRows && b + 1 < buckets)
-            {
-                bounds.Add(b + 1);
-            }
-        }
-
-        bounds.Add(buckets);
+        var bounds = GroupChunks.Bounds(starts); // buckets are groups of keys: the same ranges as the groups' work
         var longest = Longest(starts);
         if (bounds.Count == 2)
         {

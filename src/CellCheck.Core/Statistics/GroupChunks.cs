@@ -14,6 +14,21 @@ internal static class GroupChunks
     public static void ForEach(int[] starts, Action<int, int> body)
     {
         var groups = starts.Length - 1;
+        var bounds = Bounds(starts);
+        if (bounds.Count == 2)
+        {
+            body(0, groups);
+            return;
+        }
+
+        Parallel.For(0, bounds.Count - 1, r => body(bounds[r], bounds[r + 1]));
+    }
+
+    /// <summary>Where each range of <see cref="ForEach"/> starts (a group number), and the number of groups: whole groups,
+    /// at least <see cref="ChunkRows"/> values a range bar the last.</summary>
+    public static List<int> Bounds(int[] starts)
+    {
+        var groups = starts.Length - 1;
         var bounds = new List<int> { 0 };
         for (var g = 0; g < groups; g++)
         {
@@ -24,13 +39,7 @@ internal static class GroupChunks
         }
 
         bounds.Add(groups);
-        if (bounds.Count == 2)
-        {
-            body(0, groups);
-            return;
-        }
-
-        Parallel.For(0, bounds.Count - 1, r => body(bounds[r], bounds[r + 1]));
+        return bounds;
     }
 
     /// <summary>Calls <paramref name="body"/>(from, to) once per range of <see cref="ChunkRows"/> consecutive positions of

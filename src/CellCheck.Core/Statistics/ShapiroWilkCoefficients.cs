@@ -72,21 +72,17 @@ internal static class ShapiroWilkCoefficients
         }
 
         sumSquares *= 2.0;
-        var norm = Math.Sqrt(sumSquares);
-        var u = 1.0 / Math.Sqrt(n);
         var (m0, m1) = (m[0], half > 1 ? m[1] : 0.0);
-        a[0] = (m0 / norm) + Polynomial.Evaluate(Last, u);
         int first;
         double phi;
         if (n > 5)
         {
-            a[1] = (m1 / norm) + Polynomial.Evaluate(NextToLast, u);
-            phi = (sumSquares - (2.0 * m0 * m0) - (2.0 * m1 * m1))
-                / (1.0 - (2.0 * a[0] * a[0]) - (2.0 * a[1] * a[1]));
+            (a[0], a[1], phi) = Outer(m0, m1, sumSquares, n);
             first = 2;
         }
         else
         {
+            a[0] = (m0 / Math.Sqrt(sumSquares)) + Polynomial.Evaluate(Last, 1.0 / Math.Sqrt(n));
             phi = (sumSquares - (2.0 * m0 * m0)) / (1.0 - (2.0 * a[0] * a[0]));
             first = 1;
         }
@@ -108,7 +104,8 @@ internal static class ShapiroWilkCoefficients
     /// range-scaled differences d_i = (x₍ₙ₋ᵢ₎ − x₍ᵢ₊₁₎) / <paramref name="range"/> of opposite order statistics, without
     /// storing the vector (40 MB at ten million values): the Blom scores are made a chunk at a time, side by side, and
     /// summed into Σ m² and Σ_{i≥2} m_i d_i in one pass (Neumaier's compensation); then
-    /// Σ a_i d_i = a_n d_0 + a_(n−1) d_1 + Σ_{i≥2} m_i d_i / √φ with a_n, a_(n−1) and φ formed as in <see cref="Compute"/>.
+    /// Σ a_i d_i = a_n d_0 + a_(n−1) d_1 + Σ_{i≥2} m_i d_i / √φ with a_n, a_(n−1) and φ from <see cref="Outer"/>, as in
+    /// <see cref="Compute"/>.
     /// The same sum as over the stored weights up to the rounding of that plain sum (the common factor 1/√φ is applied
     /// once, not to each weight).
     /// </summary>
@@ -142,13 +139,19 @@ internal static class ShapiroWilkCoefficients
             (m0, m1) = start == 0 ? (scores[0], scores[1]) : (m0, m1);
         }
 
-        var sumSquares = 2.0 * squares.Value;
+        var (a0, a1, phi) = Outer(m0, m1, 2.0 * squares.Value, n);
+        return (a0 * ((x[n - 1] - x[0]) / range)) + (a1 * ((x[n - 2] - x[1]) / range)) + (inner.Value / Math.Sqrt(phi));
+    }
+
+    /// <summary>For n &gt; 5: a_n and a_(n−1) from Royston's polynomials added to m_n/√(m'm) and m_(n−1)/√(m'm), and φ, the
+    /// squared length of the other scores that the other weights are divided by (√φ) to make the vector unit length.</summary>
+    private static (double An, double AnMinus1, double Phi) Outer(double m0, double m1, double sumSquares, int n)
+    {
         var norm = Math.Sqrt(sumSquares);
         var u = 1.0 / Math.Sqrt(n);
         var a0 = (m0 / norm) + Polynomial.Evaluate(Last, u);
         var a1 = (m1 / norm) + Polynomial.Evaluate(NextToLast, u);
-        var phi = (sumSquares - (2.0 * m0 * m0) - (2.0 * m1 * m1)) / (1.0 - (2.0 * a0 * a0) - (2.0 * a1 * a1));
-        return (a0 * ((x[n - 1] - x[0]) / range)) + (a1 * ((x[n - 2] - x[1]) / range)) + (inner.Value / Math.Sqrt(phi));
+        return (a0, a1, (sumSquares - (2.0 * m0 * m0) - (2.0 * m1 * m1)) / (1.0 - (2.0 * a0 * a0) - (2.0 * a1 * a1)));
     }
 
     /// <summary>The Blom score of the (i + 1)-th largest of n, −Φ⁻¹((i + 1 − 3/8)/(n + 1/4)).</summary>

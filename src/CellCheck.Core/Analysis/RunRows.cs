@@ -14,7 +14,4 @@ internal readonly struct RunRows
 
     /// <summary>The data row at run position <paramref name="k"/>.</summary>
     public int this[int k] => _rows is null ? k : _rows[k];
-
-    /// <summary>The data rows of the first <paramref name="count"/> positions, as a list.</summary>
-    public int[] ToArray(int count) => _rows ?? [.. Enumerable.Range(0, count)];
 }

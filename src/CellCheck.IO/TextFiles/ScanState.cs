@@ -16,8 +16,8 @@ internal sealed class ScanState(long maxLineBytes)
 
     /// <summary>Takes a run of bytes. ASCII without NUL (the usual data file) is taken at once when its lines end in LF
     /// (<see cref="UnixLines"/>: one vectorised check of the bytes and a count of the LFs), else line by line with
-    /// vectorised searches; anything else, and any line that would run
-    /// over the limit, byte by byte through <see cref="Step"/>, so faults are found and located exactly as there.</summary>
+    /// vectorised searches; anything else, and any line that would run over the limit, byte by byte through
+    /// <see cref="Step"/>, so faults are found and located exactly as there.</summary>
     public TextFault? Run(ReadOnlySpan<byte> bytes)
     {
         if (_pending == 0 && !_afterCr && bytes.IndexOfAnyExcept(LfText) < 0 && UnixLines(bytes))
@@ -74,8 +74,13 @@ internal sealed class ScanState(long maxLineBytes)
     {
         var first = bytes.IndexOf((byte)'\n');
         var last = bytes.LastIndexOf((byte)'\n');
-        var longest = first < 0 ? _lineBytes + bytes.Length : Math.Max(_lineBytes + first, LongestBetween(bytes[first..(last + 1)]));
-        if (Math.Max(longest, bytes.Length - last - 1) > maxLineBytes)
+
+        // the bytes before the first LF continue the line before; a line between two LFs is shorter than the stretch
+        // from the first LF to the last; the bytes after the last LF start the next line
+        var mayRunOver = first < 0
+            ? _lineBytes + bytes.Length > maxLineBytes
+            : _lineBytes + first > maxLineBytes || last - first + 1 > maxLineBytes || bytes.Length - last - 1 > maxLineBytes;
+        if (mayRunOver)
         {
             return false;
         }
@@ -90,10 +95,6 @@ internal sealed class ScanState(long maxLineBytes)
         (_lineBytes, _column) = (bytes.Length - last - 1, bytes.Length - last);
         return true;
     }
-
-    /// <summary>The longest run of bytes between two LFs in <paramref name="lines"/> (which starts and ends with one), or
-    /// 0 when every run is shorter than the limit for certain (the whole span is).</summary>
-    private long LongestBetween(ReadOnlySpan<byte> lines) => lines.Length <= maxLineBytes ? 0 : long.MaxValue;
 
     public TextFault? Step(byte b)
     {

@@ -34,7 +34,7 @@ public sealed class RunSequenceTests
             .OrderBy(i => order[partition.RowOrder[i]]).ThenBy(i => partition.RowOrder[i]).ToArray();
         Assert.Equal(1, missing);
         Assert.Equal(expected, use);
-        Assert.Equal(expected.Select(i => partition.RowOrder[i]).ToArray(), rows.ToArray(use.Length));
+        Assert.Equal(expected.Select(i => partition.RowOrder[i]).ToArray(), Enumerable.Range(0, use.Length).Select(k => rows[k]).ToArray());
     }
 
     [Fact]
@@ -48,7 +48,7 @@ public sealed class RunSequenceTests
         var (use, rows, missing, _) = RunSequence.UsedRows(order, partition, null);
         Assert.True(rows.IsIdentity);
         Assert.Equal(0, missing);
-        Assert.Equal(Enumerable.Range(0, n), rows.ToArray(n));
+        Assert.Equal(Enumerable.Range(0, n), Enumerable.Range(0, n).Select(k => rows[k]));
         Assert.All(Enumerable.Range(0, n), k => Assert.Equal(k, partition.RowOrder[use[k]]));
         Assert.Equal(n - 1, rows[n - 1]);
     }

@@ -1,5 +1,6 @@
 using System.Diagnostics;
 using System.Globalization;
+using CellCheck.Core.Data;
 using CellCheck.Core.Order;
 
 namespace CellCheck.Benchmarks;
@@ -30,7 +31,7 @@ internal static class OrderTiming
             _ = GroupedDurbinWatson.Moments(cell, cells);
             var grouped = clock.Elapsed.TotalSeconds;
             clock.Restart();
-            _ = CellBlockDurbinWatson.Test(e, cell, cells, [dummy], days - 1);
+            _ = CellBlockDurbinWatson.Test(e, cell, cells, [LevelCodes.From(dummy, days - 1)], days - 1);
             var blocked = clock.Elapsed.TotalSeconds;
             Console.WriteLine(string.Create(CultureInfo.InvariantCulture, $"grouped moments {grouped:F3} s, blocked test {blocked:F3} s"));
         }

@@ -80,25 +80,18 @@ internal static class OrderChecks
 
     /// <summary>Durbin-Watson on the residuals in run order: for the cell-means fit above the exact limit, from the
     /// O(n) moments of a group-indicator design; otherwise on the fitted design matrix; null when that is too large.
-    /// The residuals are gathered already, so the cell-based tests write the cells over <paramref name="use"/> and the
-    /// first block's contrast columns over <paramref name="spare"/> (both free by then) instead of two fresh arrays.</summary>
-    private static DurbinWatsonResult? DurbinWatsonOf(DesignData data, CellPartition partition, ResidualSet residuals, int[] use, RunRows rows, int[] spare, double[] e)
+    /// The residuals are gathered already, so the cell-based tests write the cells over <paramref name="use"/> (free by
+    /// then) instead of a fresh array; the blocks' contrast columns are narrow codes (a byte a row below 255 levels).</summary>
+    private static DurbinWatsonResult? DurbinWatsonOf(DesignData data, CellPartition partition, ResidualSet residuals, int[] use, RunRows rows, int[]? spare, double[] e)
     {
         if (residuals.Diagnostics!.Absorbed is { } absorbed)
         {
-            var cellRun = RunOrderColumns.CellsInRunOrder(partition, use, spare);
-            var dummyRun = new int[absorbed.LevelColumns.Length][];
+            var cellRun = RunOrderColumns.CellsInRunOrder(partition, use, rows, spare);
+            var dummyRun = new LevelCodes[absorbed.LevelColumns.Length];
             for (var j = 0; j < dummyRun.Length; j++)
             {
-                // the fit's contrast column of each block level, looked up by row in run order (only the first
-                // e.Length entries are read: the spare array may be longer)
-                var contrast = absorbed.LevelColumns[j];
-                var codes = data.Blocks[j].Codes;
-                var run = dummyRun[j] = j == 0 ? spare : new int[e.Length];
-                for (var k = 0; k < e.Length; k++)
-                {
-                    run[k] = contrast[codes[rows[k]]];
-                }
+                // the fit's contrast column of each block level, looked up by row in run order
+                dummyRun[j] = LevelCodes.From(new RunContrasts(data.Blocks[j].Codes, absorbed.LevelColumns[j], rows, e.Length), absorbed.P);
             }
 
             return CellBlockDurbinWatson.Test(e, cellRun, partition.CellCount, dummyRun, absorbed.P);
@@ -106,7 +99,7 @@ internal static class OrderChecks
 
         if (residuals.Diagnostics!.Estimable is null && use.Length > ExactLimit)
         {
-            return GroupedDurbinWatson.Test(e, RunOrderColumns.CellsInRunOrder(partition, use, spare), partition.CellCount);
+            return GroupedDurbinWatson.Test(e, RunOrderColumns.CellsInRunOrder(partition, use, rows, spare), partition.CellCount);
         }
 
         var x = Design(partition, residuals, use);

@@ -14,8 +14,8 @@ internal static class RunSequence
     /// <param name="leverage">Leverage of each row in grouped order; null when no row has leverage one.</param>
     /// <returns>The grouped positions and data rows of the used rows in run order (no list of rows when every row is used
     /// in file order: run position k is data row k), the number of rows without a run position, and a working array of
-    /// one int a data row that the caller may overwrite.</returns>
-    public static (int[] Use, RunRows Rows, int Missing, int[] Spare) UsedRows(double[] order, CellPartition partition, double[]? leverage)
+    /// one int a data row that the caller may overwrite (none when every row is used in file order).</returns>
+    public static (int[] Use, RunRows Rows, int Missing, int[]? Spare) UsedRows(double[] order, CellPartition partition, double[]? leverage)
     {
         var rows = order.Length;
         var grouped = new int[rows];
@@ -63,8 +63,8 @@ internal static class RunSequence
         if (sorted && count == rows)
         {
             // every row used, in file order (logged data): the run sequence is the rows themselves, and the grouped
-            // position of each row is the array just filled; only the working array is new
-            return (grouped, new RunRows(null), missing, GC.AllocateUninitializedArray<int>(rows));
+            // position of each row is the array just filled; nothing else is needed
+            return (grouped, new RunRows(null), missing, null);
         }
 
         var sequence = new int[count];

@@ -34,38 +34,44 @@ public sealed class LevelCodes : IRowValues
 
     /// <summary>The codes of a column of <paramref name="levels"/> levels, each code first mapped through
     /// <paramref name="remap"/> when given (missing codes stay missing).</summary>
-    public static LevelCodes From(ReadOnlySpan<int> codes, int levels, int[]? remap = null)
+    public static LevelCodes From(ReadOnlySpan<int> codes, int levels, int[]? remap = null) => From(new SpanRowValues(codes), levels, remap);
+
+    /// <summary>As <see cref="From(ReadOnlySpan{int}, int, int[])"/>, the codes read one at a time from
+    /// <paramref name="codes"/> (a column computed on the fly needs no full-width copy first).</summary>
+    internal static LevelCodes From<TColumn>(TColumn codes, int levels, int[]? remap = null)
+        where TColumn : IRowValues, allows ref struct
     {
         ArgumentOutOfRangeException.ThrowIfNegative(levels);
+        var length = codes.Length;
         if (levels < byte.MaxValue)
         {
-            var bytes = GC.AllocateUninitializedArray<byte>(codes.Length);
-            for (var i = 0; i < codes.Length; i++)
+            var bytes = GC.AllocateUninitializedArray<byte>(length);
+            for (var i = 0; i < length; i++)
             {
                 bytes[i] = (byte)(Checked(codes[i], levels, remap) + 1);
             }
 
-            return new LevelCodes(bytes, null, null, codes.Length);
+            return new LevelCodes(bytes, null, null, length);
         }
 
         if (levels < ushort.MaxValue)
         {
-            var shorts = GC.AllocateUninitializedArray<ushort>(codes.Length);
-            for (var i = 0; i < codes.Length; i++)
+            var shorts = GC.AllocateUninitializedArray<ushort>(length);
+            for (var i = 0; i < length; i++)
             {
                 shorts[i] = (ushort)(Checked(codes[i], levels, remap) + 1);
             }
 
-            return new LevelCodes(null, shorts, null, codes.Length);
+            return new LevelCodes(null, shorts, null, length);
         }
 
-        var ints = GC.AllocateUninitializedArray<int>(codes.Length);
-        for (var i = 0; i < codes.Length; i++)
+        var ints = GC.AllocateUninitializedArray<int>(length);
+        for (var i = 0; i < length; i++)
         {
             ints[i] = Checked(codes[i], levels, remap);
         }
 
-        return new LevelCodes(null, null, ints, codes.Length);
+        return new LevelCodes(null, null, ints, length);
     }
 
     /// <summary>The codes at <paramref name="rows"/>, in the same width.</summary>

@@ -1,4 +1,5 @@
 using System.Runtime.CompilerServices;
+using CellCheck.Core.Data;
 
 namespace CellCheck.Core.Order;
 
@@ -19,7 +20,7 @@ namespace CellCheck.Core.Order;
 /// </remarks>
 internal static class BlockTraceSums
 {
-    public static (double[,] G, double[,] K) Compute(int[] cell, int cells, int[][] dummy, int p, double[] mean, double[] size)
+    public static (double[,] G, double[,] K) Compute(int[] cell, int cells, LevelCodes[] dummy, int p, double[] mean, double[] size)
     {
         var n = cell.Length;
         var weightG = new double[cells]; // Σ_{t∈c} d_t
@@ -111,7 +112,7 @@ internal static class BlockTraceSums
     /// <summary>Adds weight·(z_a z_bᵀ) (and its transpose when <paramref name="symmetric"/>) to the indicator part and
     /// the cross table (the cell-mean part is added per cell).</summary>
     [MethodImpl(MethodImplOptions.AggressiveInlining)] // called several times per position
-    private static void Pair(int[][] dummy, int a, int b, double weight, double[,] ee, double[] cross, int[] cell, int cells, bool symmetric = false)
+    private static void Pair(LevelCodes[] dummy, int a, int b, double weight, double[,] ee, double[] cross, int[] cell, int cells, bool symmetric = false)
     {
         foreach (var column in dummy)
         {
@@ -142,7 +143,7 @@ internal static class BlockTraceSums
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)] // called several times per position
-    private static void Indicators(int[][] dummy, int t, double[] target, int offset, double weight)
+    private static void Indicators(LevelCodes[] dummy, int t, double[] target, int offset, double weight)
     {
         foreach (var column in dummy)
         {

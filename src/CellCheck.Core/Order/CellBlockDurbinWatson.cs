@@ -1,3 +1,4 @@
+using CellCheck.Core.Data;
 using CellCheck.Core.Models;
 using MathNet.Numerics.LinearAlgebra;
 
@@ -18,9 +19,10 @@ public static class CellBlockDurbinWatson
 {
     /// <param name="residuals">Residuals of the fit, in run order.</param>
     /// <param name="cell">The cell of each residual, in run order.</param>
-    /// <param name="dummy">Per block factor, the block-contrast column (0 .. p − 1) of each residual in run order, or −1 for the first level.</param>
+    /// <param name="dummy">Per block factor, the block-contrast column (0 .. p − 1) of each residual in run order, or −1
+    /// (<see cref="FactorColumn.Missing"/>) for the first level: codes of p levels, one byte a row below 255.</param>
     /// <returns>Null when the block contrasts are not estimable apart from the cells over these rows.</returns>
-    public static DurbinWatsonResult? Test(ReadOnlySpan<double> residuals, int[] cell, int cells, int[][] dummy, int p,
+    public static DurbinWatsonResult? Test(ReadOnlySpan<double> residuals, int[] cell, int cells, LevelCodes[] dummy, int p,
         DurbinWatsonAlternative alternative = DurbinWatsonAlternative.Positive)
     {
         var n = residuals.Length;

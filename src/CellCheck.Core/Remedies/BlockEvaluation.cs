@@ -16,7 +16,7 @@ internal sealed class BlockEvaluation
     private const int StackRows = 256;
 
     private readonly int[] starts;
-    private readonly double[] logs;
+    private readonly KeptLogs logs;
     private readonly PowerSumTable table;
     private readonly double[] within;
     private readonly double[]? means;
@@ -25,7 +25,7 @@ internal sealed class BlockEvaluation
 
     /// <param name="within">Receives each group's within-group sum of squares (one slot per group and padding lane).</param>
     /// <param name="means">Receives each group's mean of w (blocked model), or null.</param>
-    public BlockEvaluation(int[] starts, double[] logs, PowerSumTable table, double[] within, double[]? means)
+    public BlockEvaluation(int[] starts, KeptLogs logs, PowerSumTable table, double[] within, double[]? means)
     {
         this.starts = starts;
         this.logs = logs;
@@ -124,7 +124,7 @@ internal sealed class BlockEvaluation
     /// <summary>Σu and Σu² − (Σu)²/n for group g row by row, with u = expm1(λe)/λ.</summary>
     private (double Sum, double Squares) Direct(int g, int n, double lambda)
     {
-        var cell = logs.AsSpan(starts[g], n);
+        var cell = logs.Of(g, n);
         var rented = n > StackRows ? System.Buffers.ArrayPool<double>.Shared.Rent(n) : null;
         var u = rented is null ? stackalloc double[StackRows] : rented.AsSpan();
         var centre = table.Centre[g];

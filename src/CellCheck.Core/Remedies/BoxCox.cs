@@ -61,13 +61,13 @@ public static class BoxCox
         Fit(rss, y.Length, () => rss switch
         {
             GroupedRss grouped => new GroupedPowerSums(grouped.Starts, Logs(y)).LogLikelihood,
-            SettingRss settings => new GroupedPowerSums(settings.Starts, Logs(y, settings.Permutation), settings.Between).LogLikelihood,
+            SettingRss settings => new GroupedPowerSums(settings.Starts, SettingLogs.Of(new ShiftedValues(y, 0), settings), settings.Between).LogLikelihood,
             _ => ProfileOf(rss, Logs(y)),
         }, model, shift);
 
     /// <summary>The fit on cells plus blocks with y read on demand (the same fit as for its copy).</summary>
     internal static PowerFit Fit(SettingRss settings, ShiftedValues y, string model, double shift) =>
-        Fit(settings, y.Length, () => new GroupedPowerSums(settings.Starts, SettingLogs.Of(y, settings.Permutation), settings.Between).LogLikelihood, model, shift);
+        Fit(settings, y.Length, () => new GroupedPowerSums(settings.Starts, SettingLogs.Of(y, settings), settings.Between).LogLikelihood, model, shift);
 
     private static PowerFit Fit(IResidualSumOfSquares rss, int n, Func<Func<double, double>> profileOf, string model, double shift)
     {
@@ -115,21 +115,18 @@ public static class BoxCox
 
     private static Func<double, double> ProfileOf(IResidualSumOfSquares rss, double[] logs) => l => LogLikelihood(rss, logs, l);
 
-    private static double[] Logs(ReadOnlySpan<double> y) => Logs(y, null);
-
-    /// <summary>log y, in the order of <paramref name="order"/> when given (y[order[k]] at k).</summary>
-    private static double[] Logs(ReadOnlySpan<double> y, int[]? order)
+    /// <summary>log y.</summary>
+    private static double[] Logs(ReadOnlySpan<double> y)
     {
         var logs = new double[y.Length];
-        for (var k = 0; k < y.Length; k++)
+        for (var i = 0; i < y.Length; i++)
         {
-            var i = order is null ? k : order[k];
             if (!(y[i] > 0) || !double.IsFinite(y[i]))
             {
                 throw new ArgumentException($"Box-Cox needs positive finite values; value {i} is {y[i]}", nameof(y));
             }
 
-            logs[k] = Math.Log(y[i]);
+            logs[i] = Math.Log(y[i]);
         }
 
         return logs;

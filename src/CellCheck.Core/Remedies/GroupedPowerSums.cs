@@ -40,7 +40,7 @@ internal sealed class GroupedPowerSums
     private const int Chunk = 2048;
 
     private readonly int[] starts;
-    private readonly double[] logs;
+    private readonly int count;
     private readonly PowerSumTable table;
     private readonly double sumLog;
     private readonly CellBlockFit? between;
@@ -56,20 +56,21 @@ internal sealed class GroupedPowerSums
     private readonly double[]? betweenResiduals;
 
     /// <param name="starts">Group g holds rows starts[g] .. starts[g + 1] − 1 of <paramref name="logs"/>.</param>
-    /// <param name="logs">log y of every row, grouped.</param>
+    /// <param name="logs">log y of every row, grouped: read while the sums are formed, then kept only for the groups
+    /// that may need it later (<see cref="KeptLogs"/>).</param>
     /// <param name="between">For groups that are not the model's cells (identical settings of cells and blocks), the
     /// weighted fit of the model to the group means; null when the groups are the cells of the cell-means model.</param>
     public GroupedPowerSums(int[] starts, double[] logs, CellBlockFit? between = null)
     {
         this.starts = starts;
         this.between = between;
-        this.logs = logs;
+        count = logs.Length;
         var groups = starts.Length - 1;
         table = new PowerSumTable(starts, logs);
         within = new double[table.Blocks * PowerSumTable.Lanes];
         means = between is null ? null : new double[within.Length];
         betweenResiduals = between is null ? null : new double[groups];
-        blocks = new BlockEvaluation(starts, logs, table, within, means);
+        blocks = new BlockEvaluation(starts, new KeptLogs(starts, logs, table.Reach), table, within, means);
         foreach (var l in logs)
         {
             sumLog += l;
@@ -86,9 +87,10 @@ internal sealed class GroupedPowerSums
         }
     }
 
-    /// <summary>ℓ(λ) as defined by <see cref="BoxCox"/>.</summary>
+    /// <summary>ℓ(λ) as defined by <see cref="BoxCox"/>, for λ in the search range (|λ| ≤ <see cref="KeptLogs.LambdaLimit"/>).</summary>
     public double LogLikelihood(double lambda)
     {
+        ArgumentOutOfRangeException.ThrowIfGreaterThan(Math.Abs(lambda), KeptLogs.LambdaLimit, nameof(lambda));
         var groups = table.Groups;
 
         // the largest 2λ·c_g: rounding is monotone, so it is 2λ times the largest (λ ≥ +0) or smallest (λ ≤ −0) c_g
@@ -118,7 +120,6 @@ internal sealed class GroupedPowerSums
             }
         }
 
-        var count = logs.Length;
         return ((lambda - 1) * sumLog) - (count / 2.0 * (top + Math.Log(total) - Math.Log(count)));
     }
 

@@ -3,34 +3,49 @@ using CellCheck.Core.Statistics;
 namespace CellCheck.Core.Remedies;
 
 /// <summary>
-/// log y in the order of the identical-settings groups, for the Box-Cox profile of the blocked model: computed in
-/// parallel over ranges of rows (each log on its own), with the same check and message as one pass in order (the
-/// first value in that order that is not positive and finite is the one reported).
+/// log y in the setting order of <see cref="SettingRss"/>, for the Box-Cox profile of the blocked model: computed in
+/// parallel over ranges of cells (each log on its own, each cell sorted by setting as it is read), with the same check
+/// and message as one pass in order (the first value in that order that is not positive and finite is the one reported).
 /// </summary>
 internal static class SettingLogs
 {
-    /// <summary>log y[order[k]] at k.</summary>
+    /// <summary>log y at each position of the setting order of <paramref name="settings"/>.</summary>
     /// <exception cref="ArgumentException">A value is not positive and finite.</exception>
-    public static double[] Of(ShiftedValues y, int[] order)
+    public static double[] Of<TValues>(TValues y, SettingRss settings)
+        where TValues : IIndexedValues
     {
-        var logs = new double[order.Length];
+        var logs = new double[settings.Count];
         var failed = 0;
-        GroupChunks.ForEachRange(order.Length, (from, to) =>
+        var cursor = settings.NewCursor();
+        var cellStarts = new int[settings.Cells + 1];
+        for (var c = 0; c <= settings.Cells; c++)
         {
-            for (var k = from; k < to; k++)
-            {
-                var v = y[order[k]];
-                if (!(v > 0) || !double.IsFinite(v))
-                {
-                    Volatile.Write(ref failed, 1);
-                    return;
-                }
+            cellStarts[c] = settings.CellStart(c);
+        }
 
-                logs[k] = Math.Log(v);
+        GroupChunks.ForEach(cellStarts, (first, end) =>
+        {
+            var order = new int[GroupChunks.LargestSize(cellStarts, first, end)];
+            for (var c = first; c < end && Volatile.Read(ref failed) == 0; c++)
+            {
+                settings.CellOrder(c, cursor, order);
+                var from = cellStarts[c];
+                for (var k = 0; k < cellStarts[c + 1] - from; k++)
+                {
+                    var v = y[order[k]];
+                    if (!(v > 0) || !double.IsFinite(v))
+                    {
+                        Volatile.Write(ref failed, 1);
+                        return;
+                    }
+
+                    logs[from + k] = Math.Log(v);
+                }
             }
         });
         if (failed != 0)
         {
+            var order = settings.Permutation();
             var k = Array.FindIndex(order, i => !(y[i] > 0) || !double.IsFinite(y[i]));
             throw new ArgumentException($"Box-Cox needs positive finite values; value {order[k]} is {y[order[k]]}", nameof(y));
         }

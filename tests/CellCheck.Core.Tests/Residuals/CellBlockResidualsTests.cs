@@ -147,7 +147,7 @@ public sealed class CellBlockResidualsTests
         var cells = partition.CellOfGroupedIndex();
         var fit = absorbed.Diagnostics!.Absorbed!;
         var actual = CellBlockDurbinWatson.Test(e, run.Select(i => cells[i]).ToArray(), partition.CellCount,
-            partition.GroupedCodes(blocks).Select((codes, j) => run.Select(i => fit.LevelColumns[j][codes[i]]).ToArray()).ToArray(), fit.P)!;
+            partition.GroupedCodes(blocks).Select((codes, j) => LevelCodes.From(run.Select(i => fit.LevelColumns[j][codes[i]]).ToArray(), fit.P)).ToArray(), fit.P)!;
         Assert.Equal(expected.ExpectedD, actual.ExpectedD, 1e-9 * expected.ExpectedD);
         Assert.Equal(expected.VarianceD, actual.VarianceD, 1e-9 * expected.VarianceD);
         Assert.Equal(expected.P, actual.P, 1e-9);
@@ -160,7 +160,7 @@ public sealed class CellBlockResidualsTests
     {
         var (partition, blocks, _, _) = Design(7, blockFactors);
         var settings = SettingRss.Build(partition, blocks)!;
-        var logs = Array.ConvertAll(settings.Permutation, i => Math.Log(partition.Values.Values[i]));
+        var logs = Array.ConvertAll(settings.Permutation(), i => Math.Log(partition.Values.Values[i]));
         var sums = new GroupedPowerSums(settings.Starts, logs, settings.Between);
         var plain = new Remedies.PlainGroupedProfile(settings.Starts, logs, settings.Between);
         foreach (var lambda in new[] { -5, -2.0, -0.5, 0.0, 1e-9, 0.3, 1.0, 2.5, 5 })
@@ -177,7 +177,7 @@ public sealed class CellBlockResidualsTests
         var settings = SettingRss.Build(partition, blocks)!;
         var y = partition.Values.Values;
         var logs = y.Select(v => Math.Log(v)).ToArray();
-        var sums = new GroupedPowerSums(settings.Starts, Array.ConvertAll(settings.Permutation, i => logs[i]), settings.Between);
+        var sums = new GroupedPowerSums(settings.Starts, Array.ConvertAll(settings.Permutation(), i => logs[i]), settings.Between);
         Assert.Equal(dense.ResidualDf, settings.ResidualDf);
         foreach (var lambda in new[] { -2.0, -0.5, 0.0, 0.3, 1.0, 2.5 })
         {
@@ -196,7 +196,7 @@ public sealed class CellBlockResidualsTests
         const int n = 300;
         var cell = Enumerable.Range(0, n).Select(t => t < 6 ? t : random.Next(6)).ToArray();
         var residuals = Enumerable.Range(0, n).Select(_ => random.NextDouble() - 0.5).ToArray();
-        var noContrast = new[] { Enumerable.Repeat(-1, n).ToArray() };
+        var noContrast = new[] { LevelCodes.From(Enumerable.Repeat(-1, n).ToArray(), 0) };
         var blocked = CellBlockDurbinWatson.Test(residuals, cell, 6, noContrast, 0)!;
         var grouped = GroupedDurbinWatson.Test(residuals, cell, 6);
         Assert.Equal(grouped, blocked);

@@ -1,0 +1,55 @@
+namespace CellCheck.Core.Remedies;
+
+/// <summary>
+/// The logs of the groups that the Box-Cox power sums may have to evaluate row by row (<see cref="BlockEvaluation"/>):
+/// those whose centred logs reach beyond 1/|λ| somewhere in the search range, |λ| ≤ <see cref="LambdaLimit"/>. Every
+/// other group is evaluated from its power sums at every λ of the range, so its logs are not kept once the sums are
+/// formed: on data of modest spread none are, and the profile's evaluations then hold no array of the data's length.
+/// </summary>
+/// <remarks>The series of a group that is not kept always converges within its stored terms inside the range: the
+/// terms are chosen by <see cref="GroupedPowerSums.TermsWithin"/> at the largest |λ|, and the stopping bound at a
+/// smaller |λ| is a product of smaller factors (rounding is monotone), so it falls below the stopping level no later.</remarks>
+internal sealed class KeptLogs
+{
+    /// <summary>The largest |λ| at which the profile is evaluated: the end of the search range farther from zero.</summary>
+    public static readonly double LambdaLimit = Math.Max(-BoxCox.SearchLower, BoxCox.SearchUpper);
+
+    private readonly int[] offset; // start of group g's logs in kept, or −1
+    private readonly double[] kept;
+
+    /// <param name="starts">Group g holds rows starts[g] .. starts[g + 1] − 1 of <paramref name="logs"/>.</param>
+    /// <param name="reach">max |log y − c_g| of each group.</param>
+    public KeptLogs(int[] starts, double[] logs, double[] reach)
+    {
+        var groups = starts.Length - 1;
+        offset = new int[groups];
+        var total = 0;
+        for (var g = 0; g < groups; g++)
+        {
+            offset[g] = Far(reach[g]) ? total : -1;
+            total += Far(reach[g]) ? starts[g + 1] - starts[g] : 0;
+        }
+
+        kept = new double[total];
+        for (var g = 0; g < groups; g++)
+        {
+            if (offset[g] >= 0)
+            {
+                logs.AsSpan(starts[g], starts[g + 1] - starts[g]).CopyTo(kept.AsSpan(offset[g]));
+            }
+        }
+    }
+
+    /// <summary>Number of logs kept.</summary>
+    public int Count => kept.Length;
+
+    /// <summary>The <paramref name="n"/> logs of group <paramref name="g"/>.</summary>
+    /// <exception cref="InvalidOperationException">The group's logs were not kept (a programming error: see the remarks).</exception>
+    public ReadOnlySpan<double> Of(int g, int n) => offset[g] >= 0
+        ? kept.AsSpan(offset[g], n)
+        : throw new InvalidOperationException($"group {g} was not expected to need its logs inside the search range");
+
+    /// <summary>True when a group of this reach leaves the series' reach somewhere in the search range: |λ|·reach &gt; 1
+    /// at |λ| = <see cref="LambdaLimit"/>, as <see cref="BlockEvaluation"/> tests it.</summary>
+    private static bool Far(double reach) => LambdaLimit * reach > 1;
+}

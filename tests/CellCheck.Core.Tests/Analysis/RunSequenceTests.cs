@@ -52,4 +52,39 @@ public sealed class RunSequenceTests
         Assert.All(Enumerable.Range(0, n), k => Assert.Equal(k, partition.RowOrder[use[k]]));
         Assert.Equal(n - 1, rows[n - 1]);
     }
+
+    [Theory]
+    [InlineData(true)]
+    [InlineData(false)]
+    public void The_cells_in_run_order_are_the_cell_of_each_used_position_whether_written_over_rows_or_gathered(bool fileOrder)
+    {
+        const int n = 400;
+        var random = new Random(5);
+        var factor = new FactorColumn("f", ["a", "b", "c", "d", "e"], Enumerable.Range(0, n).Select(_ => random.Next(5)).ToArray());
+        var partition = CellPartition.Build([factor], Enumerable.Range(0, n).Select(i => (double)i).ToArray());
+        var order = Enumerable.Range(0, n).Select(i => fileOrder ? i : (double)random.Next(n)).ToArray();
+        var (use, rows, _, spare) = RunSequence.UsedRows(order, partition, null);
+        Assert.Equal(fileOrder, rows.IsIdentity);
+        Assert.Equal(fileOrder, spare is null);
+        var cellOf = partition.CellOfGroupedIndex();
+        var expected = use.Select(i => cellOf[i]).ToArray();
+        Assert.Equal(expected, RunOrderColumns.CellsInRunOrder(partition, use, rows, spare));
+    }
+
+    [Fact]
+    public void A_block_contrast_read_in_run_order_into_narrow_codes_equals_the_contrast_of_each_row()
+    {
+        var random = new Random(6);
+        var levels = Enumerable.Range(0, 300).Select(i => $"b{i}").ToArray(); // past one byte a row: two-byte codes
+        var block = new FactorColumn("block", levels, Enumerable.Range(0, 1000).Select(_ => random.Next(levels.Length)).ToArray());
+        var contrast = Enumerable.Range(0, levels.Length).Select(l => l - 1).ToArray(); // first level: no column
+        var sequence = Enumerable.Range(0, 1000).OrderBy(_ => random.Next()).Take(700).ToArray();
+        foreach (var rows in new[] { new RunRows(null), new RunRows(sequence) })
+        {
+            var length = rows.IsIdentity ? 1000 : sequence.Length;
+            var codes = LevelCodes.From(new RunContrasts(block.Codes, contrast, rows, length), levels.Length - 1);
+            Assert.Equal(2, codes.Width);
+            Assert.Equal(Enumerable.Range(0, length).Select(k => contrast[block.Codes[rows[k]]]), Enumerable.Range(0, length).Select(k => codes[k]));
+        }
+    }
 }

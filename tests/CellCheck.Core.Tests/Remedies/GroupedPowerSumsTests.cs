@@ -144,4 +144,29 @@ public sealed class GroupedPowerSumsTests
             Assert.Equal(PreciseMath.ExpM1(v), PreciseMath.ExpM1(v, Math.Exp(v)));
         }
     }
+
+    [Fact]
+    public void Only_groups_whose_logs_reach_beyond_a_fifth_keep_them_for_row_by_row_evaluation()
+    {
+        // reach 0.1, 0.3 and 0.2 exactly (5 × 0.2 = 1 is still inside the series' reach), then an empty group
+        double[] logs = [1.0, 1.1, 0.9, 2.0, 2.3, 1.7, 3.0, 3.2, 2.8];
+        int[] starts = [0, 3, 6, 9, 9];
+        var reach = new double[] { 0.1, 0.3, 0.2, 0 };
+        var kept = new KeptLogs(starts, logs, reach);
+        Assert.Equal(3, kept.Count);
+        Assert.Equal(new[] { 2.0, 2.3, 1.7 }, kept.Of(1, 3).ToArray());
+        Assert.Throws<InvalidOperationException>(() => kept.Of(0, 3).Length);
+        Assert.Throws<InvalidOperationException>(() => kept.Of(2, 3).Length);
+    }
+
+    [Fact]
+    public void The_profile_is_evaluated_only_inside_the_search_range()
+    {
+        var (starts, logs) = Cells(0.02, seed: 4);
+        var sums = new GroupedPowerSums(starts, logs);
+        _ = sums.LogLikelihood(BoxCox.SearchLower);
+        _ = sums.LogLikelihood(BoxCox.SearchUpper);
+        Assert.Throws<ArgumentOutOfRangeException>(() => sums.LogLikelihood(BoxCox.SearchUpper + 0.01));
+        Assert.Throws<ArgumentOutOfRangeException>(() => sums.LogLikelihood(BoxCox.SearchLower - 0.01));
+    }
 }

@@ -169,6 +169,38 @@ public sealed class CellBlockResidualsTests
         }
     }
 
+    [Theory]
+    [InlineData(1)]
+    [InlineData(2)]
+    public void The_setting_order_is_a_stable_sort_of_the_grouped_positions_by_setting_and_the_logs_follow_it(int blockFactors)
+    {
+        var (partition, blocks, _, _) = Design(9, blockFactors);
+        var settings = SettingRss.Build(partition, blocks)!;
+        var (setting, _) = SettingGroups.Of(partition, blocks);
+        var expected = Enumerable.Range(0, setting.Length).OrderBy(i => setting[i]).ThenBy(i => i).ToArray();
+        Assert.Equal(expected, settings.Permutation());
+        var y = partition.Values.Values;
+        Assert.Equal(expected.Select(i => Math.Log(y[i])), SettingLogs.Of(new ShiftedValues(y, 0), settings));
+        for (var g = 0; g < settings.Starts.Length - 1; g++)
+        {
+            Assert.All(expected[settings.Starts[g]..settings.Starts[g + 1]], i => Assert.Equal(g, setting[i]));
+        }
+    }
+
+    [Fact]
+    public void The_logs_in_setting_order_name_the_first_value_in_that_order_that_is_not_positive()
+    {
+        var (partition, blocks, _, _) = Design(9, 1);
+        var settings = SettingRss.Build(partition, blocks)!;
+        var order = settings.Permutation();
+        var y = (double[])partition.Values.Values.Clone();
+        var (first, second) = (order[^3], order[5]);
+        y[first] = -1;
+        y[second] = 0;
+        var error = Assert.Throws<ArgumentException>(() => SettingLogs.Of(new ShiftedValues(y, 0), settings));
+        Assert.StartsWith($"Box-Cox needs positive finite values; value {second} is 0", error.Message, StringComparison.Ordinal);
+    }
+
     [Fact]
     public void The_Box_Cox_profile_by_settings_equals_the_dense_profile()
     {

@@ -32,31 +32,42 @@ internal static class BlockTraceSums
         var eeW = new double[p, p];
         // per cell: Σ m of the cell one step earlier, two steps earlier, one step later (a pass of its own, side by side)
         var neighbours = Task.Run(() => NeighbourMeans.Sum(cell, cells, mean, p));
+        // the contrast columns of positions t − 2 .. t + 1, decoded once a position into a ring of four slots
+        var m = dummy.Length;
+        Span<int> ring = stackalloc int[4 * m];
+        Decode(dummy, 0, ring[..m]);
         for (var t = 0; t < n; t++)
         {
             var c = cell[t];
             var d = Degree(t, n);
+            var z = ring.Slice((t & 3) * m, m);
+            if (t < n - 1)
+            {
+                Decode(dummy, t + 1, ring.Slice(((t + 1) & 3) * m, m));
+            }
+
             weightG[c] += d;
             weightW[c] += (d * d) + d;
-            Pair(dummy, t, t, d, eeG, crossG, cell, cells);
-            Pair(dummy, t, t, (d * d) + d, eeW, crossW, cell, cells);
-            Indicators(dummy, t, indicator, c * p, d);
+            Pair(z, z, c, c, d, eeG, crossG, cells);
+            Pair(z, z, c, c, (d * d) + d, eeW, crossW, cells);
+            Indicators(z, indicator, c * p, d);
             if (t > 0)
             {
+                var back = ring.Slice(((t - 1) & 3) * m, m);
                 var lag = -(d + Degree(t - 1, n));
-                Pair(dummy, t, t - 1, -1, eeG, crossG, cell, cells, symmetric: true);
-                Pair(dummy, t, t - 1, lag, eeW, crossW, cell, cells, symmetric: true);
-                Indicators(dummy, t - 1, indicator, c * p, -1);
+                Pair(z, back, c, cell[t - 1], -1, eeG, crossG, cells, symmetric: true);
+                Pair(z, back, c, cell[t - 1], lag, eeW, crossW, cells, symmetric: true);
+                Indicators(back, indicator, c * p, -1);
             }
 
             if (t > 1)
             {
-                Pair(dummy, t, t - 2, 1, eeW, crossW, cell, cells, symmetric: true);
+                Pair(z, ring.Slice(((t - 2) & 3) * m, m), c, cell[t - 2], 1, eeW, crossW, cells, symmetric: true);
             }
 
             if (t < n - 1)
             {
-                Indicators(dummy, t + 1, indicator, c * p, -1);
+                Indicators(ring.Slice(((t + 1) & 3) * m, m), indicator, c * p, -1);
             }
         }
 
@@ -109,47 +120,56 @@ internal static class BlockTraceSums
     [MethodImpl(MethodImplOptions.AggressiveInlining)] // called several times per position
     private static int Degree(int t, int n) => (t > 0 ? 1 : 0) + (t < n - 1 ? 1 : 0);
 
-    /// <summary>Adds weight·(z_a z_bᵀ) (and its transpose when <paramref name="symmetric"/>) to the indicator part and
-    /// the cross table (the cell-mean part is added per cell).</summary>
-    [MethodImpl(MethodImplOptions.AggressiveInlining)] // called several times per position
-    private static void Pair(LevelCodes[] dummy, int a, int b, double weight, double[,] ee, double[] cross, int[] cell, int cells, bool symmetric = false)
+    /// <summary>The contrast column of each block factor at position <paramref name="t"/>.</summary>
+    private static void Decode(LevelCodes[] dummy, int t, Span<int> target)
     {
-        foreach (var column in dummy)
+        for (var j = 0; j < dummy.Length; j++)
         {
-            var i = column[a];
+            target[j] = dummy[j][t];
+        }
+    }
+
+    /// <summary>Adds weight·(z_a z_bᵀ) (and its transpose when <paramref name="symmetric"/>) to the indicator part and
+    /// the cross table (the cell-mean part is added per cell), for positions a and b with contrast columns
+    /// <paramref name="za"/> and <paramref name="zb"/> in cells <paramref name="cellA"/> and <paramref name="cellB"/>.</summary>
+    [MethodImpl(MethodImplOptions.AggressiveInlining)] // called several times per position
+    private static void Pair(ReadOnlySpan<int> za, ReadOnlySpan<int> zb, int cellA, int cellB, double weight, double[,] ee, double[] cross, int cells, bool symmetric = false)
+    {
+        for (var j = 0; j < za.Length; j++)
+        {
+            var i = za[j];
             if (i >= 0)
             {
-                cross[(i * cells) + cell[b]] += weight;
-                foreach (var other in dummy)
+                cross[(i * cells) + cellB] += weight;
+                foreach (var k in zb)
                 {
-                    var j = other[b];
-                    if (j >= 0)
+                    if (k >= 0)
                     {
-                        ee[i, j] += weight;
+                        ee[i, k] += weight;
                         if (symmetric)
                         {
-                            ee[j, i] += weight;
+                            ee[k, i] += weight;
                         }
                     }
                 }
             }
 
-            var k = column[b];
-            if (symmetric && k >= 0)
+            var kb = zb[j];
+            if (symmetric && kb >= 0)
             {
-                cross[(k * cells) + cell[a]] += weight;
+                cross[(kb * cells) + cellA] += weight;
             }
         }
     }
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)] // called several times per position
-    private static void Indicators(LevelCodes[] dummy, int t, double[] target, int offset, double weight)
+    private static void Indicators(ReadOnlySpan<int> z, double[] target, int offset, double weight)
     {
-        foreach (var column in dummy)
+        foreach (var i in z)
         {
-            if (column[t] >= 0)
+            if (i >= 0)
             {
-                target[offset + column[t]] += weight;
+                target[offset + i] += weight;
             }
         }
     }

@@ -8,7 +8,8 @@ namespace CellCheck.Core.Remedies;
 /// model, its mean of w, A_g·Σu/n + B_g with B_g = expm1(half)/λ (c_g − c_0 at λ = 0). Four groups at a time in
 /// vector lanes, each lane the same operations as one group alone (so the same doubles); the series of expm1 runs
 /// term by term across the whole range (<see cref="PreciseMath.ExpM1Near"/>); groups whose logs spread beyond the
-/// series' reach are evaluated row by row.
+/// series' reach are evaluated row by row. Each instance holds the scratch of one evaluation: evaluations side by side
+/// take one instance each.
 /// </summary>
 internal sealed class BlockEvaluation
 {
@@ -23,18 +24,27 @@ internal sealed class BlockEvaluation
     private readonly double[] halves;
     private readonly double[]? nearExpM1;
 
-    /// <param name="within">Receives each group's within-group sum of squares (one slot per group and padding lane).</param>
-    /// <param name="means">Receives each group's mean of w (blocked model), or null.</param>
-    public BlockEvaluation(int[] starts, KeptLogs logs, PowerSumTable table, double[] within, double[]? means)
+    /// <param name="blocked">True for the blocked model: each group's mean of w is formed as well.</param>
+    public BlockEvaluation(int[] starts, KeptLogs logs, PowerSumTable table, bool blocked)
     {
         this.starts = starts;
         this.logs = logs;
         this.table = table;
-        this.within = within;
-        this.means = means;
-        halves = new double[table.Blocks * PowerSumTable.Lanes];
-        nearExpM1 = means is null ? null : new double[halves.Length];
+        within = new double[table.Blocks * PowerSumTable.Lanes];
+        means = blocked ? new double[within.Length] : null;
+        BetweenResiduals = blocked ? new double[table.Groups] : null;
+        halves = new double[within.Length];
+        nearExpM1 = blocked ? new double[halves.Length] : null;
     }
+
+    /// <summary>Each group's within-group sum of squares (one slot per group and padding lane).</summary>
+    public double[] Within => within;
+
+    /// <summary>Each group's mean of w (blocked model), or null.</summary>
+    public double[]? Means => means;
+
+    /// <summary>Room for the residuals of the group means on the model (blocked model), or null.</summary>
+    public double[]? BetweenResiduals { get; }
 
     /// <summary>Fills the slots of blocks first .. last − 1 at λ (ranges may be evaluated in parallel).</summary>
     public void Evaluate(int first, int last, double lambda, double top, double reference)

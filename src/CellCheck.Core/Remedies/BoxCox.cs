@@ -80,7 +80,9 @@ public static class BoxCox
         var profile = profileOf();
         var groups = rss switch { GroupedRss g => g.Starts.Length, SettingRss s => s.Starts.Length, _ => n };
         var step = groups > CoarseGroups ? ProfileLikelihood.CoarseStep : ProfileLikelihood.GridStep;
-        var (lambda, max, lower, upper) = ProfileLikelihood.Maximise(profile, SearchLower, SearchUpper, step);
+        // the power-sum profiles (grouped and blocked models) may be evaluated side by side; a costly one is
+        var sideBySide = step == ProfileLikelihood.CoarseStep && rss is GroupedRss or SettingRss;
+        var (lambda, max, lower, upper) = ProfileLikelihood.Maximise(profile, SearchLower, SearchUpper, step, sideBySide);
         return new PowerFit(PowerFamily.BoxCox, model, n, rss.ResidualDf, lambda, max, lower, upper, SearchLower, SearchUpper, shift);
     }
 

@@ -1,3 +1,4 @@
+using System.Collections.Concurrent;
 using CellCheck.Core.Models;
 
 namespace CellCheck.Core.Remedies;
@@ -49,11 +50,9 @@ internal sealed class GroupedPowerSums
     private readonly bool anyScale;
     private readonly double lowCentre = double.PositiveInfinity, highCentre = double.NegativeInfinity;
 
-    // scratch for one evaluation, reused (the optimiser evaluates one λ at a time)
-    private readonly BlockEvaluation blocks;
-    private readonly double[] within;
-    private readonly double[]? means;
-    private readonly double[]? betweenResiduals;
+    // the scratch of one evaluation each, reused: evaluations side by side take one each
+    private readonly KeptLogs kept;
+    private readonly ConcurrentBag<BlockEvaluation> idle = [];
 
     /// <param name="starts">Group g holds rows starts[g] .. starts[g + 1] − 1 of <paramref name="logs"/>.</param>
     /// <param name="logs">log y of every row, grouped: read while the sums are formed, then kept only for the groups
@@ -67,10 +66,7 @@ internal sealed class GroupedPowerSums
         count = logs.Length;
         var groups = starts.Length - 1;
         table = new PowerSumTable(starts, logs);
-        within = new double[table.Blocks * PowerSumTable.Lanes];
-        means = between is null ? null : new double[within.Length];
-        betweenResiduals = between is null ? null : new double[groups];
-        blocks = new BlockEvaluation(starts, new KeptLogs(starts, logs, table.Reach), table, within, means);
+        kept = new KeptLogs(starts, logs, table.Reach);
         foreach (var l in logs)
         {
             sumLog += l;
@@ -87,10 +83,23 @@ internal sealed class GroupedPowerSums
         }
     }
 
-    /// <summary>ℓ(λ) as defined by <see cref="BoxCox"/>, for λ in the search range (|λ| ≤ <see cref="KeptLogs.LambdaLimit"/>).</summary>
+    /// <summary>ℓ(λ) as defined by <see cref="BoxCox"/>, for λ in the search range (|λ| ≤ <see cref="KeptLogs.LambdaLimit"/>).
+    /// Safe to call side by side: each call works in scratch of its own, so its value does not depend on other calls.</summary>
     public double LogLikelihood(double lambda)
     {
         ArgumentOutOfRangeException.ThrowIfGreaterThan(Math.Abs(lambda), KeptLogs.LambdaLimit, nameof(lambda));
+        if (!idle.TryTake(out var evaluation))
+        {
+            evaluation = new BlockEvaluation(starts, kept, table, between is not null);
+        }
+
+        var value = LogLikelihood(lambda, evaluation);
+        idle.Add(evaluation);
+        return value;
+    }
+
+    private double LogLikelihood(double lambda, BlockEvaluation blocks)
+    {
         var groups = table.Groups;
 
         // the largest 2λ·c_g: rounding is monotone, so it is 2λ times the largest (λ ≥ +0) or smallest (λ ≤ −0) c_g
@@ -104,6 +113,7 @@ internal sealed class GroupedPowerSums
             var last = Math.Min(table.Blocks, (chunk + 1) * Chunk / PowerSumTable.Lanes);
             blocks.Evaluate(first, last, lambda, top, reference);
         });
+        var (within, means) = (blocks.Within, blocks.Means);
         var total = 0.0;
         foreach (var part in within.AsSpan(0, groups))
         {
@@ -112,7 +122,7 @@ internal sealed class GroupedPowerSums
 
         if (means is not null)
         {
-            var residuals = betweenResiduals!;
+            var residuals = blocks.BetweenResiduals!;
             between!.Residualize(means.AsSpan(0, groups), residuals);
             for (var g = 0; g < groups; g++)
             {

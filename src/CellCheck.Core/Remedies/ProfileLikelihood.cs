@@ -14,6 +14,8 @@ namespace CellCheck.Core.Remedies;
 /// going outward from λ̂ (scanned on the grid, then located by Brent's root finder to 1e-12): when the
 /// region above the cut is not connected, the part holding λ̂ is reported. Each distinct λ is evaluated once
 /// (<see cref="RememberedProfile"/>): the root searches start from grid points and λ̂, whose values are known.
+/// A profile that may be evaluated side by side has its grid points taken two at a time and its two interval ends
+/// searched at once: each value is the one the profile gives alone, so λ̂ and the interval are the same doubles.
 /// </remarks>
 internal static class ProfileLikelihood
 {
@@ -28,8 +30,9 @@ internal static class ProfileLikelihood
 
     /// <param name="gridStep">The first scan's step: <see cref="GridStep"/>, or <see cref="CoarseStep"/> where one evaluation
     /// is costly (the scan then finds the global maximum only among maxima at least that far apart).</param>
+    /// <param name="sideBySide">True when <paramref name="logLikelihood"/> may be called from two threads at once.</param>
     public static (double Lambda, double Max, double? Lower, double? Upper) Maximise(Func<double, double> logLikelihood, double lower, double upper,
-        double gridStep = GridStep)
+        double gridStep = GridStep, bool sideBySide = false)
     {
         logLikelihood = new RememberedProfile(logLikelihood).At;
         var steps = (int)Math.Round((upper - lower) / gridStep);
@@ -39,7 +42,22 @@ internal static class ProfileLikelihood
         for (var k = 0; k <= steps; k++)
         {
             grid[k] = k == steps ? upper : lower + (k * gridStep);
-            values[k] = logLikelihood(grid[k]);
+        }
+
+        if (sideBySide)
+        {
+            Parallel.For(0, steps + 1, new ParallelOptions { MaxDegreeOfParallelism = 2 }, k => values[k] = logLikelihood(grid[k]));
+        }
+        else
+        {
+            for (var k = 0; k <= steps; k++)
+            {
+                values[k] = logLikelihood(grid[k]);
+            }
+        }
+
+        for (var k = 0; k <= steps; k++)
+        {
             if (values[k] > values[best] || double.IsNaN(values[best]))
             {
                 best = k;
@@ -58,7 +76,16 @@ internal static class ProfileLikelihood
         }
 
         var level = max - Cut;
-        return (lambda, max, End(logLikelihood, grid, values, lambda, level, -1, Tolerance(gridStep)), End(logLikelihood, grid, values, lambda, level, +1, Tolerance(gridStep)));
+        double? Below() => End(logLikelihood, grid, values, lambda, level, -1, Tolerance(gridStep));
+        double? Above() => End(logLikelihood, grid, values, lambda, level, +1, Tolerance(gridStep));
+        if (!sideBySide)
+        {
+            return (lambda, max, Below(), Above());
+        }
+
+        var above = Task.Run(Above);
+        var below = Below();
+        return (lambda, max, below, above.Result);
     }
 
     /// <summary>Tolerance on λ of the refinements: 1e-12 on the fine scan; 1e-8 on the coarse scan of a costly profile,

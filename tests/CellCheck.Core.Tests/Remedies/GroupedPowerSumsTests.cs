@@ -169,4 +169,29 @@ public sealed class GroupedPowerSumsTests
         Assert.Throws<ArgumentOutOfRangeException>(() => sums.LogLikelihood(BoxCox.SearchUpper + 0.01));
         Assert.Throws<ArgumentOutOfRangeException>(() => sums.LogLikelihood(BoxCox.SearchLower - 0.01));
     }
+
+    [Fact]
+    public void Evaluations_side_by_side_give_the_values_of_evaluations_one_at_a_time_bit_for_bit()
+    {
+        var (starts, logs) = ManyGroups(0.9, seed: 12);
+        var lambdas = Enumerable.Range(0, 81).Select(k => -5 + (k * 0.125)).ToArray();
+        var alone = new GroupedPowerSums(starts, logs);
+        var expected = lambdas.Select(alone.LogLikelihood).ToArray();
+        var shared = new GroupedPowerSums(starts, logs);
+        var actual = new double[lambdas.Length];
+        Parallel.For(0, lambdas.Length, new ParallelOptions { MaxDegreeOfParallelism = 4 }, k => actual[k] = shared.LogLikelihood(lambdas[k]));
+        Assert.Equal(expected, actual);
+    }
+
+    [Fact]
+    public void A_profile_scanned_and_bounded_side_by_side_has_the_same_maximum_and_interval_as_one_scanned_alone()
+    {
+        var (starts, logs) = ManyGroups(0.3, seed: 13);
+        var sums = new GroupedPowerSums(starts, logs);
+        var alone = ProfileLikelihood.Maximise(sums.LogLikelihood, BoxCox.SearchLower, BoxCox.SearchUpper, ProfileLikelihood.CoarseStep);
+        var sideBySide = ProfileLikelihood.Maximise(sums.LogLikelihood, BoxCox.SearchLower, BoxCox.SearchUpper, ProfileLikelihood.CoarseStep, sideBySide: true);
+        Assert.Equal(alone, sideBySide);
+        Assert.NotNull(alone.Lower);
+        Assert.NotNull(alone.Upper);
+    }
 }

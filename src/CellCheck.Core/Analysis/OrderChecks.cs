@@ -25,26 +25,14 @@ internal static class OrderChecks
 
         var notes = new List<string>();
         var diagnostics = residuals.Diagnostics!;
-        var (use, rows, missing, spare) = RunSequence.UsedRows(order, partition, diagnostics.LeverageOneRows.NotBelowOne == 0 ? null : diagnostics.Leverage);
+        var leverage = diagnostics.LeverageOneRows.NotBelowOne == 0 ? null : diagnostics.Leverage;
+        // the grouped Durbin-Watson routes read the cell of each residual; the exact one reads the design instead
+        var wantsCells = diagnostics.Absorbed is not null || (diagnostics.Estimable is null && partition.RowOrder.Length > ExactLimit);
+        var ordered = RunOrdering.Of(order, partition, residuals.Residuals, leverage, wantsCells);
+        var (e, t, rows, missing, ties) = (ordered.E, ordered.T, ordered.Rows, ordered.Missing, ordered.Ties);
         if (missing > 0)
         {
             notes.Add(NumberText.Count(missing) + " row(s) have no run position and are left out of the order checks.");
-        }
-
-        // every row used in file order (logged data): the run positions are the column itself, not a copy
-        var t = rows.IsIdentity ? order : new double[use.Length];
-        var e = new double[use.Length];
-        var grouped = residuals.Residuals;
-        var ties = 0;
-        for (var k = 0; k < use.Length; k++)
-        {
-            if (!rows.IsIdentity)
-            {
-                t[k] = order[rows[k]];
-            }
-
-            e[k] = grouped[use[k]];
-            ties += k > 0 && t[k] == t[k - 1] ? 1 : 0;
         }
 
         if (ties > 0)
@@ -58,7 +46,7 @@ internal static class OrderChecks
         List<CheckResult> signAndTrend = null!;
         List<BlockOrderResult> byBlock = null!;
         Parallel.Invoke(
-            () => dw = DurbinWatsonOf(data, partition, residuals, use, rows, spare, e),
+            () => dw = DurbinWatsonOf(data, partition, residuals, ordered),
             () => signAndTrend = SignAndTrend(e, t, alpha),
             () => byBlock = data.Blocks.Count == 0 ? [] : BlockOrderChecks.Run(data, rows, e, t, alpha));
         if (dw is null)
@@ -80,13 +68,15 @@ internal static class OrderChecks
 
     /// <summary>Durbin-Watson on the residuals in run order: for the cell-means fit above the exact limit, from the
     /// O(n) moments of a group-indicator design; otherwise on the fitted design matrix; null when that is too large.
-    /// The residuals are gathered already, so the cell-based tests write the cells over <paramref name="use"/> (free by
-    /// then) instead of a fresh array; the blocks' contrast columns are narrow codes (a byte a row below 255 levels).</summary>
-    private static DurbinWatsonResult? DurbinWatsonOf(DesignData data, CellPartition partition, ResidualSet residuals, int[] use, RunRows rows, int[]? spare, double[] e)
+    /// The cells in run order come written already, or are written over the grouped positions (free by then) instead
+    /// of a fresh array; the blocks' contrast columns are narrow codes (a byte a row below 255 levels).</summary>
+    private static DurbinWatsonResult? DurbinWatsonOf(DesignData data, CellPartition partition, ResidualSet residuals, RunOrdered ordered)
     {
+        var (e, rows) = (ordered.E, ordered.Rows);
+        int[] CellRun() => ordered.Cells ?? RunOrderColumns.CellsInRunOrder(partition, ordered.Use!, ordered.Spare ?? throw new InvalidOperationException("rows sorted into run order come with a working array"));
         if (residuals.Diagnostics!.Absorbed is { } absorbed)
         {
-            var cellRun = RunOrderColumns.CellsInRunOrder(partition, use, rows, spare);
+            var cellRun = CellRun();
             var dummyRun = new LevelCodes[absorbed.LevelColumns.Length];
             for (var j = 0; j < dummyRun.Length; j++)
             {
@@ -97,12 +87,12 @@ internal static class OrderChecks
             return CellBlockDurbinWatson.Test(e, cellRun, partition.CellCount, dummyRun, absorbed.P);
         }
 
-        if (residuals.Diagnostics!.Estimable is null && use.Length > ExactLimit)
+        if (residuals.Diagnostics!.Estimable is null && e.Length > ExactLimit)
         {
-            return GroupedDurbinWatson.Test(e, RunOrderColumns.CellsInRunOrder(partition, use, rows, spare), partition.CellCount);
+            return GroupedDurbinWatson.Test(e, CellRun(), partition.CellCount);
         }
 
-        var x = Design(partition, residuals, use);
+        var x = Design(partition, residuals, ordered.Use!);
         return x is null ? null : DurbinWatson.Test(e, x, DurbinWatsonAlternative.Positive, ExactLimit);
     }
 

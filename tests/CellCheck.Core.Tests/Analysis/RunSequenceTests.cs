@@ -54,21 +54,33 @@ public sealed class RunSequenceTests
     }
 
     [Theory]
-    [InlineData(true)]
-    [InlineData(false)]
-    public void The_cells_in_run_order_are_the_cell_of_each_used_position_whether_written_over_rows_or_gathered(bool fileOrder)
+    [InlineData("file order")]
+    [InlineData("file order, a row without a position")]
+    [InlineData("shuffled")]
+    public void Residuals_and_cells_in_run_order_are_those_of_each_used_row_by_either_route(string kind)
     {
         const int n = 400;
         var random = new Random(5);
         var factor = new FactorColumn("f", ["a", "b", "c", "d", "e"], Enumerable.Range(0, n).Select(_ => random.Next(5)).ToArray());
         var partition = CellPartition.Build([factor], Enumerable.Range(0, n).Select(i => (double)i).ToArray());
-        var order = Enumerable.Range(0, n).Select(i => fileOrder ? i : (double)random.Next(n)).ToArray();
-        var (use, rows, _, spare) = RunSequence.UsedRows(order, partition, null);
-        Assert.Equal(fileOrder, rows.IsIdentity);
-        Assert.Equal(fileOrder, spare is null);
+        var residuals = Enumerable.Range(0, n).Select(_ => random.NextDouble()).ToArray();
+        var order = Enumerable.Range(0, n).Select(i => kind == "shuffled" ? random.Next(n) : (double)(i / 2)).ToArray();
+        if (kind.EndsWith("position", StringComparison.Ordinal))
+        {
+            order[17] = double.NaN;
+        }
+
+        var ordered = RunOrdering.Of(order, partition, residuals, null, wantsCells: true);
+        var (use, rows, missing, _) = RunSequence.UsedRows(order, partition, null);
         var cellOf = partition.CellOfGroupedIndex();
-        var expected = use.Select(i => cellOf[i]).ToArray();
-        Assert.Equal(expected, RunOrderColumns.CellsInRunOrder(partition, use, rows, spare));
+        Assert.Equal(kind == "file order", ordered.Cells is not null && ordered.Use is null);
+        Assert.Equal(missing, ordered.Missing);
+        Assert.Equal(use.Select(i => residuals[i]), ordered.E);
+        Assert.Equal(use.Select(k => order[partition.RowOrder[k]]), ordered.T);
+        Assert.Equal(Enumerable.Range(0, use.Length).Select(k => rows[k]), Enumerable.Range(0, use.Length).Select(k => ordered.Rows[k]));
+        Assert.Equal(ordered.T.Skip(1).Where((v, k) => v == ordered.T[k]).Count(), ordered.Ties);
+        var cells = ordered.Cells ?? RunOrderColumns.CellsInRunOrder(partition, ordered.Use!, ordered.Spare!);
+        Assert.Equal(use.Select(i => cellOf[i]), cells);
     }
 
     [Fact]

@@ -51,7 +51,7 @@ internal static class ModelChecks
         checks.Add(screened == 0
             ? CheckResults.NotTestable(CheckNames.Outliers, NotTestableReason.TooFewResidualDf)
             : new CheckResult(CheckNames.Outliers, Math.Abs(screen[0].T), null, screen[0].PAdjusted, null, StatusRules.FromP(screen[0].PAdjusted, alpha), null));
-        Unreplicated(settingCount, settings.Length, blocks, residuals, notes);
+        Unreplicated(settingCount, partition.RowOrder.Length, blocks, residuals, notes);
         var (effects, names) = Effects(partition, blocks, spec, residuals);
         return new ModelResult(info, checks, outliers, screened, effects, names, notes);
     }

@@ -12,8 +12,6 @@ public sealed class CellPartition
 {
     private readonly int[] _cellLevels;
 
-    private readonly Lazy<(int[] Settings, int Count)> _settings;
-
     private CellPartition(IReadOnlyList<FactorColumn> factors, int[] cellLevels, int[] rowOrder, GroupedValues values,
         IReadOnlyList<FactorColumn> blocks, IReadOnlyList<LevelCodes> blockCodes)
     {
@@ -23,7 +21,6 @@ public sealed class CellPartition
         Values = values;
         Blocks = blocks;
         BlockCodes = blockCodes;
-        _settings = new Lazy<(int[], int)>(() => SettingGroups.Compute(this, blocks, blockCodes));
     }
 
     /// <summary>The block factors the partition was built with (rows without a block level are left out).</summary>
@@ -31,10 +28,6 @@ public sealed class CellPartition
 
     /// <summary>Per block factor, the level index of each grouped value (the block codes in grouped order).</summary>
     public IReadOnlyList<LevelCodes> BlockCodes { get; }
-
-    /// <summary>The identical-settings group of each grouped value and the number of groups (see <see cref="SettingGroups"/>),
-    /// computed once.</summary>
-    internal (int[] Settings, int Count) Settings => _settings.Value;
 
     /// <summary>The factors that define the cells.</summary>
     public IReadOnlyList<FactorColumn> Factors { get; }

@@ -7,11 +7,12 @@ internal static class SettingGroups
 {
     /// <summary>Index of each row's identical-settings group (factor cell and block levels), in grouped order, and
     /// the number of groups. Without blocks a setting is a cell; with blocks, the block levels of each cell are
-    /// numbered in order of first appearance within the cell (rows are grouped by cell, so one small map per cell).</summary>
-    public static (int[] Settings, int Count) Of(CellPartition partition, IReadOnlyList<FactorColumn> blocks)
-    {
-        return partition.IsOwn(blocks) ? partition.Settings : Compute(partition, blocks, partition.GroupedCodes(blocks));
-    }
+    /// numbered in order of first appearance within the cell (rows are grouped by cell, so one small map per cell).
+    /// Computed afresh for each caller and not kept with the partition: at ten million rows the array is 40 MB, and the
+    /// two steps that read it (the model checks and the Box-Cox fits) hold it only while they run, which takes about a
+    /// tenth of a second each time, instead of keeping it beside every later check.</summary>
+    public static (int[] Settings, int Count) Of(CellPartition partition, IReadOnlyList<FactorColumn> blocks) =>
+        Compute(partition, blocks, partition.GroupedCodes(blocks));
 
     /// <summary>The groups from block codes given in grouped order (the partition's own, or gathered for other blocks).</summary>
     internal static (int[] Settings, int Count) Compute(CellPartition partition, IReadOnlyList<FactorColumn> blocks, IReadOnlyList<LevelCodes> codes)

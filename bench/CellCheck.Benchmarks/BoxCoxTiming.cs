@@ -33,7 +33,7 @@ internal static class BoxCoxTiming
             var rss = Time("setting groups", () => RemedyAnalyzer.Model(data, spec, partition, fitted));
             var settings = (SettingRss)rss;
             Time("rss of y", () => rss.Of(y));
-            var logs = Array.ConvertAll(settings.Permutation(), i => Math.Log(y[i]));
+            var logs = Array.ConvertAll(settings.Order.Permutation(), i => Math.Log(y[i]));
             var table = new PowerSumTable(settings.Starts, logs);
             Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
                 $"{table.Groups} groups, mean size {table.Size.Average():F1}, series terms kept {table.Terms.Average():F1} on average, {table.Sums.Length} power sums stored"));

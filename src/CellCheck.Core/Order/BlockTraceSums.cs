@@ -35,7 +35,7 @@ internal static class BlockTraceSums
         // the contrast columns of positions t − 2 .. t + 1, decoded once a position into a ring of four slots
         var m = dummy.Length;
         Span<int> ring = stackalloc int[4 * m];
-        Decode(dummy, 0, ring[..m]);
+        TraceUpdates.Decode(dummy, 0, ring[..m]);
         for (var t = 0; t < n; t++)
         {
             var c = cell[t];
@@ -43,31 +43,31 @@ internal static class BlockTraceSums
             var z = ring.Slice((t & 3) * m, m);
             if (t < n - 1)
             {
-                Decode(dummy, t + 1, ring.Slice(((t + 1) & 3) * m, m));
+                TraceUpdates.Decode(dummy, t + 1, ring.Slice(((t + 1) & 3) * m, m));
             }
 
             weightG[c] += d;
             weightW[c] += (d * d) + d;
-            Pair(z, z, c, c, d, eeG, crossG, cells);
-            Pair(z, z, c, c, (d * d) + d, eeW, crossW, cells);
-            Indicators(z, indicator, c * p, d);
+            TraceUpdates.Pair(z, z, c, c, d, eeG, crossG, cells);
+            TraceUpdates.Pair(z, z, c, c, (d * d) + d, eeW, crossW, cells);
+            TraceUpdates.Indicators(z, indicator, c * p, d);
             if (t > 0)
             {
                 var back = ring.Slice(((t - 1) & 3) * m, m);
                 var lag = -(d + Degree(t - 1, n));
-                Pair(z, back, c, cell[t - 1], -1, eeG, crossG, cells, symmetric: true);
-                Pair(z, back, c, cell[t - 1], lag, eeW, crossW, cells, symmetric: true);
-                Indicators(back, indicator, c * p, -1);
+                TraceUpdates.Pair(z, back, c, cell[t - 1], -1, eeG, crossG, cells, symmetric: true);
+                TraceUpdates.Pair(z, back, c, cell[t - 1], lag, eeW, crossW, cells, symmetric: true);
+                TraceUpdates.Indicators(back, indicator, c * p, -1);
             }
 
             if (t > 1)
             {
-                Pair(z, ring.Slice(((t - 2) & 3) * m, m), c, cell[t - 2], 1, eeW, crossW, cells, symmetric: true);
+                TraceUpdates.Pair(z, ring.Slice(((t - 2) & 3) * m, m), c, cell[t - 2], 1, eeW, crossW, cells, symmetric: true);
             }
 
             if (t < n - 1)
             {
-                Indicators(ring.Slice(((t + 1) & 3) * m, m), indicator, c * p, -1);
+                TraceUpdates.Indicators(ring.Slice(((t + 1) & 3) * m, m), indicator, c * p, -1);
             }
         }
 
@@ -119,60 +119,6 @@ internal static class BlockTraceSums
 
     [MethodImpl(MethodImplOptions.AggressiveInlining)] // called several times per position
     private static int Degree(int t, int n) => (t > 0 ? 1 : 0) + (t < n - 1 ? 1 : 0);
-
-    /// <summary>The contrast column of each block factor at position <paramref name="t"/>.</summary>
-    private static void Decode(LevelCodes[] dummy, int t, Span<int> target)
-    {
-        for (var j = 0; j < dummy.Length; j++)
-        {
-            target[j] = dummy[j][t];
-        }
-    }
-
-    /// <summary>Adds weight·(z_a z_bᵀ) (and its transpose when <paramref name="symmetric"/>) to the indicator part and
-    /// the cross table (the cell-mean part is added per cell), for positions a and b with contrast columns
-    /// <paramref name="za"/> and <paramref name="zb"/> in cells <paramref name="cellA"/> and <paramref name="cellB"/>.</summary>
-    [MethodImpl(MethodImplOptions.AggressiveInlining)] // called several times per position
-    private static void Pair(ReadOnlySpan<int> za, ReadOnlySpan<int> zb, int cellA, int cellB, double weight, double[,] ee, double[] cross, int cells, bool symmetric = false)
-    {
-        for (var j = 0; j < za.Length; j++)
-        {
-            var i = za[j];
-            if (i >= 0)
-            {
-                cross[(i * cells) + cellB] += weight;
-                foreach (var k in zb)
-                {
-                    if (k >= 0)
-                    {
-                        ee[i, k] += weight;
-                        if (symmetric)
-                        {
-                            ee[k, i] += weight;
-                        }
-                    }
-                }
-            }
-
-            var kb = zb[j];
-            if (symmetric && kb >= 0)
-            {
-                cross[(kb * cells) + cellA] += weight;
-            }
-        }
-    }
-
-    [MethodImpl(MethodImplOptions.AggressiveInlining)] // called several times per position
-    private static void Indicators(ReadOnlySpan<int> z, double[] target, int offset, double weight)
-    {
-        foreach (var i in z)
-        {
-            if (i >= 0)
-            {
-                target[offset + i] += weight;
-            }
-        }
-    }
 
     /// <summary>EE − (X + Xᵀ) + Σ_c weight_c m_c m_cᵀ + sign·(Y + Yᵀ), X[a, b] = Σ_c cross[a, c]·m_c[b], Y = Σ_c m_c lagged_cᵀ.</summary>
     private static double[,] Assemble(double[,] ee, double[] cross, double[] weight, double[] lagged, double sign, double[] mean, int cells, int p)

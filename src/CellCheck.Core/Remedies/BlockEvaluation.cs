@@ -13,9 +13,6 @@ namespace CellCheck.Core.Remedies;
 /// </summary>
 internal sealed class BlockEvaluation
 {
-    /// <summary>Largest group whose transformed values <see cref="Direct"/> keeps on the stack.</summary>
-    private const int StackRows = 256;
-
     private readonly int[] starts;
     private readonly KeptLogs logs;
     private readonly PowerSumTable table;
@@ -102,7 +99,7 @@ internal sealed class BlockEvaluation
             {
                 var g = (b * PowerSumTable.Lanes) + lane;
                 var n = starts[g + 1] - starts[g];
-                var (sum, spreadRow) = Direct(g, n, lambda);
+                var (sum, spreadRow) = logs.RowByRow(g, n, table.Centre[g], lambda);
                 var ag = a.GetElement(lane);
                 within[g] = n > 1 ? ag * ag * spreadRow : 0;
                 means?[g] = (ag * sum / n) + shift.GetElement(lane);
@@ -129,34 +126,5 @@ internal sealed class BlockEvaluation
         }
 
         return Vector256.Create(expm1) / Vector256.Create(lambda);
-    }
-
-    /// <summary>Σu and Σu² − (Σu)²/n for group g row by row, with u = expm1(λe)/λ.</summary>
-    private (double Sum, double Squares) Direct(int g, int n, double lambda)
-    {
-        var cell = logs.Of(g, n);
-        var rented = n > StackRows ? System.Buffers.ArrayPool<double>.Shared.Rent(n) : null;
-        var u = rented is null ? stackalloc double[StackRows] : rented.AsSpan();
-        var centre = table.Centre[g];
-        double sum = 0, squares = 0;
-        for (var i = 0; i < n; i++)
-        {
-            u[i] = PreciseMath.ExpM1(lambda * (cell[i] - centre)) / lambda;
-            sum += u[i];
-        }
-
-        var mean = sum / n;
-        for (var i = 0; i < n; i++)
-        {
-            var d = u[i] - mean;
-            squares += d * d;
-        }
-
-        if (rented is not null)
-        {
-            System.Buffers.ArrayPool<double>.Shared.Return(rented);
-        }
-
-        return (sum, squares);
     }
 }

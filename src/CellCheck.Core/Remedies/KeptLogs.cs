@@ -14,6 +14,9 @@ internal sealed class KeptLogs
     /// <summary>The largest |λ| at which the profile is evaluated: the end of the search range farther from zero.</summary>
     public static readonly double LambdaLimit = Math.Max(-BoxCox.SearchLower, BoxCox.SearchUpper);
 
+    /// <summary>Largest group whose transformed values <see cref="RowByRow"/> keeps on the stack.</summary>
+    private const int StackRows = 256;
+
     private readonly int[] offset; // start of group g's logs in kept, or −1
     private readonly double[] kept;
 
@@ -48,6 +51,35 @@ internal sealed class KeptLogs
     public ReadOnlySpan<double> Of(int g, int n) => offset[g] >= 0
         ? kept.AsSpan(offset[g], n)
         : throw new InvalidOperationException($"group {g} was not expected to need its logs inside the search range");
+
+    /// <summary>Σu and Σu² − (Σu)²/n for group g of n rows, log-mean <paramref name="centre"/>, row by row, with
+    /// u = expm1(λe)/λ and e = log y − centre.</summary>
+    public (double Sum, double Squares) RowByRow(int g, int n, double centre, double lambda)
+    {
+        var cell = Of(g, n);
+        var rented = n > StackRows ? System.Buffers.ArrayPool<double>.Shared.Rent(n) : null;
+        var u = rented is null ? stackalloc double[StackRows] : rented.AsSpan();
+        double sum = 0, squares = 0;
+        for (var i = 0; i < n; i++)
+        {
+            u[i] = PreciseMath.ExpM1(lambda * (cell[i] - centre)) / lambda;
+            sum += u[i];
+        }
+
+        var mean = sum / n;
+        for (var i = 0; i < n; i++)
+        {
+            var d = u[i] - mean;
+            squares += d * d;
+        }
+
+        if (rented is not null)
+        {
+            System.Buffers.ArrayPool<double>.Shared.Return(rented);
+        }
+
+        return (sum, squares);
+    }
 
     /// <summary>True when a group of this reach leaves the series' reach somewhere in the search range: |λ|·reach &gt; 1
     /// at |λ| = <see cref="LambdaLimit"/>, as <see cref="BlockEvaluation"/> tests it.</summary>

@@ -3,7 +3,7 @@ using CellCheck.Core.Statistics;
 namespace CellCheck.Core.Remedies;
 
 /// <summary>
-/// log y in the setting order of <see cref="SettingRss"/>, for the Box-Cox profile of the blocked model: computed in
+/// log y in a setting order (<see cref="SettingOrder"/>), for the Box-Cox profile of the blocked model: computed in
 /// parallel over ranges of cells (each log on its own, each cell sorted by setting as it is read), with the same check
 /// and message as one pass in order (the first value in that order that is not positive and finite is the one reported).
 /// </summary>
@@ -11,7 +11,7 @@ internal static class SettingLogs
 {
     /// <summary>log y at each position of the setting order of <paramref name="settings"/>.</summary>
     /// <exception cref="ArgumentException">A value is not positive and finite.</exception>
-    public static double[] Of<TValues>(TValues y, SettingRss settings)
+    public static double[] Of<TValues>(TValues y, SettingOrder settings)
         where TValues : IIndexedValues
     {
         var logs = new double[settings.Count];

@@ -160,7 +160,7 @@ public sealed class CellBlockResidualsTests
     {
         var (partition, blocks, _, _) = Design(7, blockFactors);
         var settings = SettingRss.Build(partition, blocks)!;
-        var logs = Array.ConvertAll(settings.Permutation(), i => Math.Log(partition.Values.Values[i]));
+        var logs = Array.ConvertAll(settings.Order.Permutation(), i => Math.Log(partition.Values.Values[i]));
         var sums = new GroupedPowerSums(settings.Starts, logs, settings.Between);
         var plain = new Remedies.PlainGroupedProfile(settings.Starts, logs, settings.Between);
         foreach (var lambda in new[] { -5, -2.0, -0.5, 0.0, 1e-9, 0.3, 1.0, 2.5, 5 })
@@ -178,9 +178,9 @@ public sealed class CellBlockResidualsTests
         var settings = SettingRss.Build(partition, blocks)!;
         var (setting, _) = SettingGroups.Of(partition, blocks);
         var expected = Enumerable.Range(0, setting.Length).OrderBy(i => setting[i]).ThenBy(i => i).ToArray();
-        Assert.Equal(expected, settings.Permutation());
+        Assert.Equal(expected, settings.Order.Permutation());
         var y = partition.Values.Values;
-        Assert.Equal(expected.Select(i => Math.Log(y[i])), SettingLogs.Of(new ShiftedValues(y, 0), settings));
+        Assert.Equal(expected.Select(i => Math.Log(y[i])), SettingLogs.Of(new ShiftedValues(y, 0), settings.Order));
         for (var g = 0; g < settings.Starts.Length - 1; g++)
         {
             Assert.All(expected[settings.Starts[g]..settings.Starts[g + 1]], i => Assert.Equal(g, setting[i]));
@@ -192,12 +192,12 @@ public sealed class CellBlockResidualsTests
     {
         var (partition, blocks, _, _) = Design(9, 1);
         var settings = SettingRss.Build(partition, blocks)!;
-        var order = settings.Permutation();
+        var order = settings.Order.Permutation();
         var y = (double[])partition.Values.Values.Clone();
         var (first, second) = (order[^3], order[5]);
         y[first] = -1;
         y[second] = 0;
-        var error = Assert.Throws<ArgumentException>(() => SettingLogs.Of(new ShiftedValues(y, 0), settings));
+        var error = Assert.Throws<ArgumentException>(() => SettingLogs.Of(new ShiftedValues(y, 0), settings.Order));
         Assert.StartsWith($"Box-Cox needs positive finite values; value {second} is 0", error.Message, StringComparison.Ordinal);
     }
 
@@ -209,7 +209,7 @@ public sealed class CellBlockResidualsTests
         var settings = SettingRss.Build(partition, blocks)!;
         var y = partition.Values.Values;
         var logs = y.Select(v => Math.Log(v)).ToArray();
-        var sums = new GroupedPowerSums(settings.Starts, Array.ConvertAll(settings.Permutation(), i => logs[i]), settings.Between);
+        var sums = new GroupedPowerSums(settings.Starts, Array.ConvertAll(settings.Order.Permutation(), i => logs[i]), settings.Between);
         Assert.Equal(dense.ResidualDf, settings.ResidualDf);
         foreach (var lambda in new[] { -2.0, -0.5, 0.0, 0.3, 1.0, 2.5 })
         {

@@ -22,6 +22,10 @@ public static class BoxCox
     /// <summary>Above this many groups the profile is first scanned on the coarse grid (<see cref="ProfileLikelihood.CoarseStep"/>).</summary>
     public const int CoarseGroups = 20000;
 
+    /// <summary>Most groups whose power-sum profile is evaluated two λ at a time (each evaluation then takes at most 40 MB
+    /// of scratch of its own).</summary>
+    public const int SideBySideGroups = 1 << 20;
+
     /// <summary>Default search range for λ̂.</summary>
     public const double SearchLower = -5, SearchUpper = 5;
 
@@ -80,8 +84,9 @@ public static class BoxCox
         var profile = profileOf();
         var groups = rss switch { GroupedRss g => g.Starts.Length, SettingRss s => s.Starts.Length, _ => n };
         var step = groups > CoarseGroups ? ProfileLikelihood.CoarseStep : ProfileLikelihood.GridStep;
-        // the power-sum profiles (grouped and blocked models) may be evaluated side by side; a costly one is
-        var sideBySide = step == ProfileLikelihood.CoarseStep && rss is GroupedRss or SettingRss;
+        // the power-sum profiles (grouped and blocked models) may be evaluated side by side; a costly one is, unless the
+        // second evaluation's scratch (five doubles a group) would be large
+        var sideBySide = step == ProfileLikelihood.CoarseStep && groups <= SideBySideGroups && rss is GroupedRss or SettingRss;
         var (lambda, max, lower, upper) = ProfileLikelihood.Maximise(profile, SearchLower, SearchUpper, step, sideBySide);
         return new PowerFit(PowerFamily.BoxCox, model, n, rss.ResidualDf, lambda, max, lower, upper, SearchLower, SearchUpper, shift);
     }

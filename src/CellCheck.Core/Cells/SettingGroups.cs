@@ -14,8 +14,8 @@ internal static class SettingGroups
     public static (int[] Settings, int Count) Of(CellPartition partition, IReadOnlyList<FactorColumn> blocks) =>
         Compute(partition, blocks, partition.GroupedCodes(blocks));
 
-    /// <summary>The groups from block codes given in grouped order (the partition's own, or gathered for other blocks).</summary>
-    internal static (int[] Settings, int Count) Compute(CellPartition partition, IReadOnlyList<FactorColumn> blocks, IReadOnlyList<LevelCodes> codes)
+    /// <summary>The groups from the block codes in grouped order.</summary>
+    private static (int[] Settings, int Count) Compute(CellPartition partition, IReadOnlyList<FactorColumn> blocks, IReadOnlyList<LevelCodes> codes)
     {
         var radix = blocks.Select(b => b.Levels.Count + 1).ToArray();
         var result = new int[partition.RowOrder.Length];

@@ -17,12 +17,7 @@ internal static class SettingLogs
         var logs = new double[settings.Count];
         var failed = 0;
         var cursor = settings.NewCursor();
-        var cellStarts = new int[settings.Cells + 1];
-        for (var c = 0; c <= settings.Cells; c++)
-        {
-            cellStarts[c] = settings.CellStart(c);
-        }
-
+        var cellStarts = settings.CellStarts;
         GroupChunks.ForEach(cellStarts, (first, end) =>
         {
             var order = new int[GroupChunks.LargestSize(cellStarts, first, end)];

@@ -1,3 +1,5 @@
+using CellCheck.Core.Statistics;
+
 namespace CellCheck.Core.Remedies;
 
 /// <summary>
@@ -16,21 +18,22 @@ internal sealed class SettingOrder(int[] settings, int[] cellStarts, int[] start
     /// <summary>Number of positions.</summary>
     public int Count => settings.Length;
 
-    /// <summary>Number of cells; cell c holds positions CellStart(c) .. CellStart(c + 1) − 1, of the grouped order and of
-    /// the setting order alike.</summary>
+    /// <summary>Number of cells.</summary>
     public int Cells => cellStarts.Length - 1;
 
     /// <summary>The most positions of one cell.</summary>
-    public int LargestCell { get; } = Largest(cellStarts);
+    public int LargestCell { get; } = GroupChunks.LargestSize(cellStarts, 0, cellStarts.Length - 1);
 
-    public int CellStart(int c) => cellStarts[c];
+    /// <summary>Cell c holds positions CellStarts[c] .. CellStarts[c + 1] − 1, of the grouped order and of the setting
+    /// order alike.</summary>
+    public int[] CellStarts => cellStarts;
 
     /// <summary>A cursor for <see cref="CellOrder"/>: where each setting's next position goes. One cursor serves every
     /// cell once, and cells read side by side (each writes only its own settings' slots).</summary>
     public int[] NewCursor() => (int[])Starts.Clone();
 
     /// <summary>Writes the grouped positions of cell <paramref name="c"/> in setting order into the first positions of
-    /// <paramref name="target"/>: position CellStart(c) + k of the setting order is target[k].</summary>
+    /// <paramref name="target"/>: position CellStarts[c] + k of the setting order is target[k].</summary>
     public void CellOrder(int c, int[] cursor, Span<int> target)
     {
         var from = cellStarts[c];
@@ -51,16 +54,5 @@ internal sealed class SettingOrder(int[] settings, int[] cellStarts, int[] start
         }
 
         return order;
-    }
-
-    private static int Largest(int[] cellStarts)
-    {
-        var largest = 0;
-        for (var c = 0; c + 1 < cellStarts.Length; c++)
-        {
-            largest = Math.Max(largest, cellStarts[c + 1] - cellStarts[c]);
-        }
-
-        return largest;
     }
 }

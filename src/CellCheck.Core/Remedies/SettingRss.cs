@@ -97,8 +97,8 @@ internal sealed class SettingRss : IResidualSumOfSquares
         for (var c = 0; c < Order.Cells; c++)
         {
             Order.CellOrder(c, cursor, order);
-            var from = Order.CellStart(c);
-            for (; g < means.Length && Starts[g] < Order.CellStart(c + 1); g++)
+            var from = Order.CellStarts[c];
+            for (; g < means.Length && Starts[g] < Order.CellStarts[c + 1]; g++)
             {
                 var sum = 0.0;
                 for (var k = Starts[g]; k < Starts[g + 1]; k++)

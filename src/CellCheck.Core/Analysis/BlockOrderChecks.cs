@@ -7,7 +7,7 @@ namespace CellCheck.Core.Analysis;
 /// block's residuals in run order.</summary>
 internal static class BlockOrderChecks
 {
-    public static List<BlockOrderResult> Run(DesignData data, RunRows rows, double[] e, double[] t, double alpha)
+    public static List<BlockOrderResult> Run(DesignData data, RunRows rows, double[] e, RunPositions t, double alpha)
     {
         var result = new List<BlockOrderResult>();
         var block = data.Blocks[0];
@@ -31,15 +31,7 @@ internal static class BlockOrderChecks
 
         // a stable counting sort of the run-ordered residuals by block level keeps run order within each level;
         // when every level is one stretch already, each level is read in place
-        var (eb, tb) = contiguous ? (e, t) : (new double[e.Length], new double[e.Length]);
-        var next = (int[])counts.Clone();
-        for (var k = 0; k < e.Length && !contiguous; k++)
-        {
-            var at = next[codes[rows[k]]]++;
-            eb[at] = e[k];
-            tb[at] = t[k];
-        }
-
+        var (eb, tb) = contiguous ? (e, t) : Sorted(e, t, rows, codes, counts);
         for (var level = 0; level < levels; level++)
         {
             var length = counts[level + 1] - counts[level];
@@ -50,11 +42,25 @@ internal static class BlockOrderChecks
 
             var from = contiguous ? first[level] : counts[level];
             var el = eb.AsSpan(from, length);
-            var tl = tb.AsSpan(from, length);
+            var tl = tb.Slice(from, length);
             result.Add(new BlockOrderResult(block.Levels[level], length, length > 1 ? DurbinWatson.Statistic(el) : null,
                 length > 1 ? LagCorrelation.Lag1(el) : null, OrderChecks.SignAndTrend(el, tl, alpha)));
         }
 
         return result;
+    }
+
+    private static (double[] E, RunPositions T) Sorted(double[] e, RunPositions t, RunRows rows, LevelCodes codes, int[] counts)
+    {
+        var (eb, tb) = (new double[e.Length], new double[e.Length]);
+        var next = (int[])counts.Clone();
+        for (var k = 0; k < e.Length; k++)
+        {
+            var at = next[codes[rows[k]]]++;
+            eb[at] = e[k];
+            tb[at] = t[k];
+        }
+
+        return (eb, RunPositions.From(tb));
     }
 }

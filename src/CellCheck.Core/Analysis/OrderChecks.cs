@@ -96,7 +96,7 @@ internal static class OrderChecks
         return x is null ? null : DurbinWatson.Test(e, x, DurbinWatsonAlternative.Positive, ExactLimit);
     }
 
-    internal static List<CheckResult> SignAndTrend(ReadOnlySpan<double> e, ReadOnlySpan<double> t, double alpha)
+    internal static List<CheckResult> SignAndTrend(ReadOnlySpan<double> e, RunPositions t, double alpha)
     {
         var runs = RunsTest.Test(e);
         var trend = OrderTrend.Test(e, t);

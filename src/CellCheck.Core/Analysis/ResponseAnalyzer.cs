@@ -91,21 +91,10 @@ public static class ResponseAnalyzer
                 return fitted;
             },
             r.Residuals, () => r.Studentized, () => d.StudentizedExternal, () => d.Leverage, () => d.CooksDistance,
-            () => data.RunOrder is { } ro ? Gather(order, ro) : null,
+            () => data.RunOrder?.Gather(order),
             () => data.Blocks.Select(b => b.Codes.Gather(order)).ToArray())
         {
             BlockLevels = data.Blocks.Select(b => b.Levels).ToArray(),
         };
-    }
-
-    private static T[] Gather<T>(int[] order, T[] source)
-    {
-        var result = new T[order.Length];
-        for (var i = 0; i < order.Length; i++)
-        {
-            result[i] = source[order[i]];
-        }
-
-        return result;
     }
 }

@@ -1,3 +1,5 @@
+using CellCheck.Core.Data;
+
 namespace CellCheck.Core.Analysis;
 
 /// <summary>The residuals of the used rows in run order and what the order checks read beside them.</summary>
@@ -9,4 +11,4 @@ namespace CellCheck.Core.Analysis;
 /// <param name="Use">The grouped position of each residual (null when <paramref name="Cells"/> was written directly).</param>
 /// <param name="Spare">A working array of one int a data row, free to overwrite, or null.</param>
 /// <param name="Cells">The cell of each residual, when written directly; null when it is to be read through <paramref name="Use"/>.</param>
-internal sealed record RunOrdered(double[] E, double[] T, RunRows Rows, int Missing, int Ties, int[]? Use, int[]? Spare, int[]? Cells);
+internal sealed record RunOrdered(double[] E, RunPositions T, RunRows Rows, int Missing, int Ties, int[]? Use, int[]? Spare, int[]? Cells);

@@ -1,4 +1,5 @@
 using CellCheck.Core.Cells;
+using CellCheck.Core.Data;
 using CellCheck.Core.Statistics;
 
 namespace CellCheck.Core.Analysis;
@@ -13,7 +14,7 @@ internal static class RunOrdering
 {
     /// <param name="leverage">Leverage of each row in grouped order; null when no row has leverage one.</param>
     /// <param name="wantsCells">True when the cell of each residual will be read (the grouped Durbin-Watson routes).</param>
-    public static RunOrdered Of(double[] order, CellPartition partition, double[] residuals, double[]? leverage, bool wantsCells)
+    public static RunOrdered Of(RunPositions order, CellPartition partition, double[] residuals, double[]? leverage, bool wantsCells)
     {
         if (wantsCells && leverage is null && partition.RowOrder.Length == order.Length && InOrder(order, out var tied))
         {
@@ -37,28 +38,36 @@ internal static class RunOrdering
         }
 
         var (use, rows, missing, spare) = RunSequence.UsedRows(order, partition, leverage);
-        var t = rows.IsIdentity ? order : new double[use.Length];
+        var t = rows.IsIdentity ? null : new double[use.Length];
         var gathered = new double[use.Length];
         var ties = 0;
         for (var k = 0; k < use.Length; k++)
         {
-            if (!rows.IsIdentity)
+            gathered[k] = residuals[use[k]];
+            if (t is not null)
             {
                 t[k] = order[rows[k]];
+                ties += k > 0 && t[k] == t[k - 1] ? 1 : 0;
             }
-
-            gathered[k] = residuals[use[k]];
-            ties += k > 0 && t[k] == t[k - 1] ? 1 : 0;
+            else
+            {
+                ties += k > 0 && order[k] == order[k - 1] ? 1 : 0;
+            }
         }
 
-        return new RunOrdered(gathered, t, rows, missing, ties, use, spare, null);
+        return new RunOrdered(gathered, t is null ? order : RunPositions.From(t), rows, missing, ties, use, spare, null);
     }
 
     /// <summary>True when the run positions are all present and never decrease; <paramref name="ties"/> counts the
-    /// positions equal to the one before.</summary>
-    private static bool InOrder(double[] order, out int ties)
+    /// positions equal to the one before. Consecutive positions (held without an array) are in order and untied.</summary>
+    private static bool InOrder(RunPositions order, out int ties)
     {
         ties = 0;
+        if (order.IsConsecutive)
+        {
+            return true;
+        }
+
         for (var k = 0; k < order.Length; k++)
         {
             if (double.IsNaN(order[k]) || (k > 0 && order[k] < order[k - 1]))

@@ -1,4 +1,5 @@
 using CellCheck.Core.Cells;
+using CellCheck.Core.Data;
 
 namespace CellCheck.Core.Analysis;
 
@@ -15,7 +16,7 @@ internal static class RunSequence
     /// <returns>The grouped positions and data rows of the used rows in run order (no list of rows when every row is used
     /// in file order: run position k is data row k), the number of rows without a run position, and a working array of
     /// one int a data row that the caller may overwrite (none when every row is used in file order).</returns>
-    public static (int[] Use, RunRows Rows, int Missing, int[]? Spare) UsedRows(double[] order, CellPartition partition, double[]? leverage)
+    public static (int[] Use, RunRows Rows, int Missing, int[]? Spare) UsedRows(RunPositions order, CellPartition partition, double[]? leverage)
     {
         var rows = order.Length;
         var grouped = new int[rows];
@@ -102,7 +103,7 @@ internal static class RunSequence
         }
     }
 
-    private static void CountingSort(double[] order, int[] grouped, int[] rowsInOrder, double low, int width)
+    private static void CountingSort(RunPositions order, int[] grouped, int[] rowsInOrder, double low, int width)
     {
         var starts = new int[width + 1];
         for (var r = 0; r < grouped.Length; r++)
@@ -127,7 +128,7 @@ internal static class RunSequence
         }
     }
 
-    private static void ComparisonSort(double[] order, int[] grouped, int[] rowsOf)
+    private static void ComparisonSort(RunPositions order, int[] grouped, int[] rowsOf)
     {
         var keys = new double[rowsOf.Length];
         var k = 0;

@@ -72,7 +72,7 @@ public sealed class DesignData
     public int RowCount => SourceLines.Length;
 
     /// <summary>Run position (or time in seconds) of each row, NaN where missing; null when no run order was declared.</summary>
-    public double[]? RunOrder { get; init; }
+    public RunPositions? RunOrder { get; init; }
 
     /// <summary>Rows left out by the design's row filter (not errors; counted in the report).</summary>
     public int FilteredOut { get; init; }

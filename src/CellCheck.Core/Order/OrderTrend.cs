@@ -1,3 +1,4 @@
+using CellCheck.Core.Data;
 using CellCheck.Core.Statistics;
 using MathNet.Numerics.Distributions;
 
@@ -20,16 +21,7 @@ namespace CellCheck.Core.Order;
 public static class OrderTrend
 {
     /// <summary>Regresses the residuals on run position 1..n.</summary>
-    public static OrderTrendResult Test(ReadOnlySpan<double> residuals)
-    {
-        var positions = new double[residuals.Length];
-        for (var i = 0; i < positions.Length; i++)
-        {
-            positions[i] = i + 1;
-        }
-
-        return Test(residuals, positions);
-    }
+    public static OrderTrendResult Test(ReadOnlySpan<double> residuals) => Fit(residuals, new CountedPositions(1));
 
     /// <summary>Regresses the residuals on the given run-order values (same length, same order).</summary>
     /// <exception cref="ArgumentException">The lengths differ or a value is not finite.</exception>
@@ -40,15 +32,40 @@ public static class OrderTrend
             throw new ArgumentException($"There are {residuals.Length} residuals but {runOrder.Length} run-order values.", nameof(runOrder));
         }
 
-        SampleGuard.RequireFinite(residuals, nameof(residuals));
         SampleGuard.RequireFinite(runOrder, nameof(runOrder));
+        return Fit(residuals, new HeldPositions(runOrder));
+    }
+
+    /// <summary>Regresses the residuals on the given run positions (same length, same order); consecutive positions
+    /// are counted on from their start, the same doubles as if they were held.</summary>
+    /// <exception cref="ArgumentException">The lengths differ or a value is not finite.</exception>
+    public static OrderTrendResult Test(ReadOnlySpan<double> residuals, RunPositions runOrder)
+    {
+        ArgumentNullException.ThrowIfNull(runOrder);
+        if (!runOrder.IsConsecutive || runOrder.Length == 0)
+        {
+            return Test(residuals, runOrder.Held);
+        }
+
+        if (runOrder.Length != residuals.Length)
+        {
+            throw new ArgumentException($"There are {residuals.Length} residuals but {runOrder.Length} run-order values.", nameof(runOrder));
+        }
+
+        return Fit(residuals, new CountedPositions(runOrder[0]));
+    }
+
+    private static OrderTrendResult Fit<TPositions>(ReadOnlySpan<double> residuals, TPositions runOrder)
+        where TPositions : IPositionReader, allows ref struct
+    {
+        SampleGuard.RequireFinite(residuals, nameof(residuals));
         var n = residuals.Length;
         if (n < 3)
         {
             return NotTestable(NotTestableReason.TooFewValues);
         }
 
-        var tMean = Descriptive.Mean(runOrder);
+        var tMean = Mean(runOrder, n);
         var eMean = Descriptive.Mean(residuals);
         var sxxSum = default(NeumaierSum);
         var sxySum = default(NeumaierSum);
@@ -82,6 +99,21 @@ public static class OrderTrend
         var t = slope / se;
         var p = se == 0.0 ? 0.0 : Math.Min(1.0, 2.0 * StudentT.CDF(0.0, 1.0, df, -Math.Abs(t)));
         return new OrderTrendResult(slope, se, t, df, p);
+    }
+
+    /// <summary>The mean of the positions by <see cref="Descriptive.Mean"/>'s formula (sums about the first), so held
+    /// and counted positions give the same double.</summary>
+    private static double Mean<TPositions>(TPositions x, int n)
+        where TPositions : IPositionReader, allows ref struct
+    {
+        var shift = x[0];
+        var sum = 0.0;
+        for (var i = 0; i < n; i++)
+        {
+            sum += x[i] - shift;
+        }
+
+        return shift + (sum / n);
     }
 
     private static OrderTrendResult NotTestable(string reason) => new(double.NaN, double.NaN, double.NaN, double.NaN, double.NaN, reason);

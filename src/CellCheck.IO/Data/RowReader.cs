@@ -60,7 +60,7 @@ internal static class RowReader
 
         // every column is finished on its own (levels put in order and codes renumbered, chunks joined): side by side
         LineNumbers sourceLines = null!;
-        double[]? order = null;
+        RunPositions? order = null;
         var built = new FactorColumn[factors.Length];
         var values = new ResponseColumn[responses.Length];
         var work = new List<Action> { () => sourceLines = lines.Build() };
@@ -89,11 +89,15 @@ internal static class RowReader
             responses.Select(r => r.Excluded).ToArray(),
             built[design.Factors.Count..])
         {
-            RunOrder = design.RunOrder is null ? null : order ?? Array.ConvertAll(sourceLines.ToArray(), l => (double)l),
+            RunOrder = design.RunOrder is null ? null : order ?? FileOrder(sourceLines),
             RunOrderColumn = design.RunOrder?.Column,
             FilteredOut = filtered,
         };
         var duplicate = RunOrderDuplicates.Find(design, data);
         return duplicate is null ? LoadResult<DesignData>.Success(data) : LoadResult<DesignData>.Failure(duplicate);
     }
+
+    /// <summary>The data-file lines as run positions (run_order: file): consecutive lines are counted, not stored.</summary>
+    private static RunPositions FileOrder(LineNumbers lines) =>
+        lines.IsConsecutive ? RunPositions.Consecutive(lines[0], lines.Length) : RunPositions.From(Array.ConvertAll(lines.ToArray(), l => (double)l));
 }

@@ -12,7 +12,7 @@ internal static class RunOrderDuplicates
 {
     public static Problem? Find(DesignFile design, DesignData data)
     {
-        if (data.RunOrder is not { } order || data.Blocks.Count == 0)
+        if (data.RunOrder is not { } order || data.Blocks.Count == 0 || order.IsConsecutive) // consecutive positions are all different
         {
             return null;
         }

@@ -34,7 +34,7 @@ public sealed class BlockOrderTests
             Enumerable.Range(2, rows).ToArray(),
             [[]],
             [new FactorColumn("day", ["1", "2", "3"], block)])
-        { RunOrder = order, RunOrderColumn = "seq" };
+        { RunOrder = RunPositions.From(order), RunOrderColumn = "seq" };
         var report = ResponseAnalyzer.Analyze(data, 0, new AnalysisOptions());
 
         // residuals by data row, from the report's grouped residuals

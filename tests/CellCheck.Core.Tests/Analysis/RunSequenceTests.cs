@@ -28,7 +28,7 @@ public sealed class RunSequenceTests
         order[7] = double.NaN;
         var leverage = new double[n];
         leverage[11] = 1.0; // a row fitted exactly is left out
-        var (use, rows, missing, _) = RunSequence.UsedRows(order, partition, leverage);
+        var (use, rows, missing, _) = RunSequence.UsedRows(RunPositions.From(order), partition, leverage);
         var expected = Enumerable.Range(0, n)
             .Where(i => !double.IsNaN(order[partition.RowOrder[i]]) && leverage[i] < 1)
             .OrderBy(i => order[partition.RowOrder[i]]).ThenBy(i => partition.RowOrder[i]).ToArray();
@@ -45,7 +45,7 @@ public sealed class RunSequenceTests
         var factor = new FactorColumn("f", ["a", "b", "c"], Enumerable.Range(0, n).Select(_ => random.Next(3)).ToArray());
         var partition = CellPartition.Build([factor], Enumerable.Range(0, n).Select(i => (double)i).ToArray());
         var order = Enumerable.Range(0, n).Select(i => 10.0 + i).ToArray();
-        var (use, rows, missing, _) = RunSequence.UsedRows(order, partition, null);
+        var (use, rows, missing, _) = RunSequence.UsedRows(RunPositions.From(order), partition, null);
         Assert.True(rows.IsIdentity);
         Assert.Equal(0, missing);
         Assert.Equal(Enumerable.Range(0, n), Enumerable.Range(0, n).Select(k => rows[k]));
@@ -57,6 +57,7 @@ public sealed class RunSequenceTests
     [InlineData("file order")]
     [InlineData("file order, a row without a position")]
     [InlineData("shuffled")]
+    [InlineData("numbered runs")]
     public void Residuals_and_cells_in_run_order_are_those_of_each_used_row_by_either_route(string kind)
     {
         const int n = 400;
@@ -64,21 +65,22 @@ public sealed class RunSequenceTests
         var factor = new FactorColumn("f", ["a", "b", "c", "d", "e"], Enumerable.Range(0, n).Select(_ => random.Next(5)).ToArray());
         var partition = CellPartition.Build([factor], Enumerable.Range(0, n).Select(i => (double)i).ToArray());
         var residuals = Enumerable.Range(0, n).Select(_ => random.NextDouble()).ToArray();
-        var order = Enumerable.Range(0, n).Select(i => kind == "shuffled" ? random.Next(n) : (double)(i / 2)).ToArray();
+        var order = Enumerable.Range(0, n).Select(i => kind switch { "shuffled" => random.Next(n), "numbered runs" => i + 1.0, _ => (double)(i / 2) }).ToArray();
         if (kind.EndsWith("position", StringComparison.Ordinal))
         {
             order[17] = double.NaN;
         }
 
-        var ordered = RunOrdering.Of(order, partition, residuals, null, wantsCells: true);
-        var (use, rows, missing, _) = RunSequence.UsedRows(order, partition, null);
+        var ordered = RunOrdering.Of(RunPositions.From(order), partition, residuals, null, wantsCells: true);
+        var (use, rows, missing, _) = RunSequence.UsedRows(RunPositions.From(order), partition, null);
         var cellOf = partition.CellOfGroupedIndex();
-        Assert.Equal(kind == "file order", ordered.Cells is not null && ordered.Use is null);
+        Assert.Equal(kind is "file order" or "numbered runs", ordered.Cells is not null && ordered.Use is null);
+        Assert.Equal(kind == "numbered runs", ordered.T.IsConsecutive);
         Assert.Equal(missing, ordered.Missing);
         Assert.Equal(use.Select(i => residuals[i]), ordered.E);
-        Assert.Equal(use.Select(k => order[partition.RowOrder[k]]), ordered.T);
+        Assert.Equal(use.Select(k => order[partition.RowOrder[k]]), ordered.T.ToArray());
         Assert.Equal(Enumerable.Range(0, use.Length).Select(k => rows[k]), Enumerable.Range(0, use.Length).Select(k => ordered.Rows[k]));
-        Assert.Equal(ordered.T.Skip(1).Where((v, k) => v == ordered.T[k]).Count(), ordered.Ties);
+        Assert.Equal(ordered.T.ToArray().Skip(1).Where((v, k) => v == ordered.T[k]).Count(), ordered.Ties);
         var cells = ordered.Cells ?? RunOrderColumns.CellsInRunOrder(partition, ordered.Use!, ordered.Spare!);
         Assert.Equal(use.Select(i => cellOf[i]), cells);
     }

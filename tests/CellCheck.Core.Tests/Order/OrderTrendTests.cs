@@ -1,3 +1,4 @@
+using CellCheck.Core.Data;
 using CellCheck.Core.Order;
 using CellCheck.Core.Statistics;
 using CellCheck.Core.Tests.Statistics;
@@ -19,6 +20,23 @@ public sealed class OrderTrendTests
         Close.Relative(1.1690884690846310, result.T, 1e-12);
         Close.Relative(0.25761765901017281, result.P, 1e-11);
         Assert.Equal(18, result.Df);
+    }
+
+    [Fact]
+    public void Counted_run_positions_give_the_doubles_of_the_same_positions_held_in_an_array()
+    {
+        var random = new Random(41);
+        var residuals = Enumerable.Range(0, 5000).Select(i => random.NextDouble() - 0.5 + (i * 1e-5)).ToArray();
+        var held = Enumerable.Range(0, 5000).Select(i => 1.7e9 + i).ToArray();
+
+        var counted = OrderTrend.Test(residuals, RunPositions.Consecutive(1.7e9, 5000));
+        var asArray = OrderTrend.Test(residuals, held.AsSpan());
+        var numbered = OrderTrend.Test(residuals);
+        var oneToN = OrderTrend.Test(residuals, Enumerable.Range(1, 5000).Select(i => (double)i).ToArray().AsSpan());
+
+        Assert.Equal(asArray, counted);
+        Assert.Equal(oneToN, numbered);
+        Assert.Throws<ArgumentException>(() => OrderTrend.Test(residuals, RunPositions.Consecutive(1, 4999)));
     }
 
     [Fact]

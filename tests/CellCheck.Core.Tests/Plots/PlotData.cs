@@ -18,7 +18,7 @@ internal static class PlotData
         var data = new DesignData([a, b], [new ResponseColumn("y", "mm", 0, rows.Select(r => r.Y).ToArray())],
             Enumerable.Range(2, rows.Length).ToArray(), [Array.Empty<ExcludedRow>()], blockColumns)
         {
-            RunOrder = runOrder,
+            RunOrder = runOrder is null ? null : RunPositions.From(runOrder),
             RunOrderColumn = runOrder is null ? null : "run",
         };
         var report = ResponseAnalyzer.Analyze(data, 0, Options);

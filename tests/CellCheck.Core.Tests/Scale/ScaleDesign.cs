@@ -114,7 +114,7 @@ internal sealed class ScaleDesign
             Enumerable.Range(2, rows).ToArray(),
             [Array.Empty<ExcludedRow>()])
         {
-            RunOrder = runOrder,
+            RunOrder = RunPositions.From(runOrder),
             RunOrderColumn = "seq",
         };
         return new ScaleDesign(levelCounts, codes, labels, values, runOrder, data);

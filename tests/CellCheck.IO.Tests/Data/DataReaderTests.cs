@@ -108,7 +108,7 @@ public sealed class DataReaderTests
         Assert.Equal(1800.0, d.RunOrder![1] - d.RunOrder[0]);
         Assert.True(double.IsNaN(d.RunOrder[2]));
         using var f = new TempDesign("a,b,y\n1,x,1\n1,x,2\n", "data: data.csv\nfactors: [a, b]\nresponses: [y]\nrun_order: file\n");
-        Assert.Equal([2.0, 3.0], Read(f).Value!.RunOrder!);
+        Assert.Equal([2.0, 3.0], Read(f).Value!.RunOrder!.ToArray());
     }
 
     [Fact]

@@ -29,7 +29,7 @@ internal static class SameData
         }
 
         Xunit.Assert.Equal(e.SourceLines.ToArray(), a.SourceLines.ToArray());
-        Bits(e.RunOrder, a.RunOrder, "run order");
+        Bits(e.RunOrder?.ToArray(), a.RunOrder?.ToArray(), "run order");
         Xunit.Assert.Equal((e.RunOrderColumn, e.FilteredOut), (a.RunOrderColumn, a.FilteredOut));
     }
 

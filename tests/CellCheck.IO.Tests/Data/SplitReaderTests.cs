@@ -68,6 +68,31 @@ public sealed class SplitReaderTests
     }
 
     [Theory]
+    [InlineData(-1, true)]
+    [InlineData(3, false)]
+    [InlineData(250, false)]
+    [InlineData(251, false)]
+    [InlineData(498, false)]
+    public void Runs_numbered_one_a_row_are_counted_across_both_ranges_until_a_number_breaks_the_count(int broken, bool consecutive)
+    {
+        // rows numbered 101, 102, ...; the row at index broken (none when −1) repeats the number before it
+        var text = Rows(500, i => $"a{i % 3},b{i % 2},{i % 11}.{i % 3},{(i == broken ? 100 + i : 101 + i).ToString(CultureInfo.InvariantCulture)}", "a,b,y,run");
+        using var t = new TempDesign(text, TwoFactors + "run_order: run\n");
+        var order = Same(t).Value!.RunOrder!;
+        Assert.Equal(consecutive, order.IsConsecutive);
+        Assert.Equal(Enumerable.Range(0, 500).Select(i => i == broken ? 100.0 + i : 101.0 + i), order.ToArray());
+    }
+
+    [Fact]
+    public void The_file_order_as_run_order_is_the_line_numbers_counted()
+    {
+        using var t = new TempDesign(Rows(300, i => $"a{i % 3},b{i % 2},{i % 7}"), TwoFactors + "run_order: file\n");
+        var order = Same(t).Value!.RunOrder!;
+        Assert.True(order.IsConsecutive);
+        Assert.Equal(Enumerable.Range(2, 300).Select(l => (double)l), order.ToArray());
+    }
+
+    [Theory]
     [InlineData("\r\n", true)]
     [InlineData("\n\n", true)]
     [InlineData("\r", false)]

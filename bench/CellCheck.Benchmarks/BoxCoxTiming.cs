@@ -34,10 +34,11 @@ internal static class BoxCoxTiming
             var settings = (SettingRss)rss;
             Time("rss of y", () => rss.Of(y));
             var logs = Array.ConvertAll(settings.Order.Permutation(), i => Math.Log(y[i]));
-            var table = new PowerSumTable(settings.Starts, logs);
+            var table = new PowerSumTable(settings.Starts, new HeldLogs(logs));
             Console.WriteLine(string.Create(CultureInfo.InvariantCulture,
-                $"{table.Groups} groups, mean size {table.Size.Average():F1}, series terms kept {table.Terms.Average():F1} on average, {table.Sums.Length} power sums stored"));
+                $"{table.Groups} groups, mean size {table.Size.Average():F1}, series terms kept {table.Terms.Average():F1} on average, {table.Stored} power sums stored"));
             var sums = Time("power sums", () => new GroupedPowerSums(settings.Starts, logs, settings.Between));
+            Time("power sums from y", () => new GroupedPowerSums(settings.Starts, new SettingLogs<ShiftedValues>(new ShiftedValues(y, 0), settings.Order), settings.Between));
             Time("41 evaluations", () => Enumerable.Range(0, 41).Sum(k => sums.LogLikelihood(-5 + (k * 0.25))));
             Time("box-cox fit", () => BoxCox.Fit(rss, y, fitted.Name, 0));
             Time("remedy fits", () => RemedyFits.Compute(data, spec, partition, fitted, column, 0, false));

@@ -17,7 +17,8 @@ internal static class BlockPowers
 
     /// <summary>Writes S_k/k! for k = 1..depth of block b to <paramref name="sums"/> (term k of the lanes at (k − 1)·Lanes).</summary>
     /// <param name="accumulated">Scratch of at least <see cref="Scratch"/> values.</param>
-    public static void Fill(int[] starts, double[] logs, PowerSumTable table, int b, Span<double> sums, Span<double> accumulated)
+    /// <param name="logs">The logs of positions <paramref name="from"/> onward, through the end of block b.</param>
+    public static void Fill(int[] starts, ReadOnlySpan<double> logs, int from, PowerSumTable table, int b, Span<double> sums, Span<double> accumulated)
     {
         const int lanes = PowerSumTable.Lanes;
         var depth = sums.Length / lanes;
@@ -31,7 +32,7 @@ internal static class BlockPowers
         for (var lane = 0; lane < lanes; lane++)
         {
             var g = (b * lanes) + lane;
-            first[lane] = g < table.Groups ? starts[g] : 0;
+            first[lane] = g < table.Groups ? starts[g] - from : 0;
             size[lane] = g < table.Groups ? starts[g + 1] - starts[g] : 0;
             rows = Math.Max(rows, size[lane]);
         }

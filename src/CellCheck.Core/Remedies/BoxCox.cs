@@ -64,14 +64,14 @@ public static class BoxCox
     internal static PowerFit Fit(IResidualSumOfSquares rss, double[] y, string model, double shift) =>
         Fit(rss, y.Length, () => rss switch
         {
-            GroupedRss grouped => new GroupedPowerSums(grouped.Starts, Logs(y)).LogLikelihood,
-            SettingRss settings => new GroupedPowerSums(settings.Starts, SettingLogs.Of(new ShiftedValues(y, 0), settings.Order), settings.Between).LogLikelihood,
+            GroupedRss grouped => new GroupedPowerSums(grouped.Starts, new PlainLogs(y)).LogLikelihood,
+            SettingRss settings => new GroupedPowerSums(settings.Starts, new SettingLogs<ShiftedValues>(new ShiftedValues(y, 0), settings.Order), settings.Between).LogLikelihood,
             _ => ProfileOf(rss, Logs(y)),
         }, model, shift);
 
     /// <summary>The fit on cells plus blocks with y read on demand (the same fit as for its copy).</summary>
     internal static PowerFit Fit(SettingRss settings, ShiftedValues y, string model, double shift) =>
-        Fit(settings, y.Length, () => new GroupedPowerSums(settings.Starts, SettingLogs.Of(y, settings.Order), settings.Between).LogLikelihood, model, shift);
+        Fit(settings, y.Length, () => new GroupedPowerSums(settings.Starts, new SettingLogs<ShiftedValues>(y, settings.Order), settings.Between).LogLikelihood, model, shift);
 
     private static PowerFit Fit(IResidualSumOfSquares rss, int n, Func<Func<double, double>> profileOf, string model, double shift)
     {

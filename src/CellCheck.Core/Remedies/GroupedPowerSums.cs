@@ -55,22 +55,28 @@ internal sealed class GroupedPowerSums
     private readonly ConcurrentBag<BlockEvaluation> idle = [];
 
     /// <param name="starts">Group g holds rows starts[g] .. starts[g + 1] − 1 of <paramref name="logs"/>.</param>
-    /// <param name="logs">log y of every row, grouped: read while the sums are formed, then kept only for the groups
-    /// that may need it later (<see cref="KeptLogs"/>).</param>
+    /// <param name="logs">log y of every row, grouped.</param>
     /// <param name="between">For groups that are not the model's cells (identical settings of cells and blocks), the
     /// weighted fit of the model to the group means; null when the groups are the cells of the cell-means model.</param>
     public GroupedPowerSums(int[] starts, double[] logs, CellBlockFit? between = null)
+        : this(starts, new HeldLogs(logs), between)
+    {
+    }
+
+    /// <param name="starts">Group g holds positions starts[g] .. starts[g + 1] − 1 of <paramref name="logs"/>.</param>
+    /// <param name="logs">log y, grouped, formed range by range while the sums are formed and then kept only for the
+    /// groups that may need them later (<see cref="KeptLogs"/>).</param>
+    /// <param name="between">As for the other constructor.</param>
+    /// <exception cref="ArgumentException">A value is not positive and finite.</exception>
+    public GroupedPowerSums(int[] starts, ILogSource logs, CellBlockFit? between = null)
     {
         this.starts = starts;
         this.between = between;
-        count = logs.Length;
+        count = logs.Count;
         var groups = starts.Length - 1;
         table = new PowerSumTable(starts, logs);
-        kept = new KeptLogs(starts, logs, table.Reach);
-        foreach (var l in logs)
-        {
-            sumLog += l;
-        }
+        kept = table.Kept;
+        sumLog = table.SumLog;
 
         for (var g = 0; g < groups; g++)
         {

@@ -17,39 +17,22 @@ internal sealed class KeptLogs
     /// <summary>Largest group whose transformed values <see cref="RowByRow"/> keeps on the stack.</summary>
     private const int StackRows = 256;
 
-    private readonly int[] offset; // start of group g's logs in kept, or −1
-    private readonly double[] kept;
+    private readonly double[]?[] byGroup;
 
-    /// <param name="starts">Group g holds rows starts[g] .. starts[g + 1] − 1 of <paramref name="logs"/>.</param>
-    /// <param name="reach">max |log y − c_g| of each group.</param>
-    public KeptLogs(int[] starts, double[] logs, double[] reach)
+    /// <param name="byGroup">The logs of each group that is <see cref="Far"/>, null for every other group.</param>
+    public KeptLogs(double[]?[] byGroup)
     {
-        var groups = starts.Length - 1;
-        offset = new int[groups];
-        var total = 0;
-        for (var g = 0; g < groups; g++)
-        {
-            offset[g] = Far(reach[g]) ? total : -1;
-            total += Far(reach[g]) ? starts[g + 1] - starts[g] : 0;
-        }
-
-        kept = new double[total];
-        for (var g = 0; g < groups; g++)
-        {
-            if (offset[g] >= 0)
-            {
-                logs.AsSpan(starts[g], starts[g + 1] - starts[g]).CopyTo(kept.AsSpan(offset[g]));
-            }
-        }
+        this.byGroup = byGroup;
+        Count = byGroup.Sum(logs => logs?.Length ?? 0);
     }
 
     /// <summary>Number of logs kept.</summary>
-    public int Count => kept.Length;
+    public int Count { get; }
 
     /// <summary>The <paramref name="n"/> logs of group <paramref name="g"/>.</summary>
     /// <exception cref="InvalidOperationException">The group's logs were not kept (a programming error: see the remarks).</exception>
-    public ReadOnlySpan<double> Of(int g, int n) => offset[g] >= 0
-        ? kept.AsSpan(offset[g], n)
+    public ReadOnlySpan<double> Of(int g, int n) => byGroup[g] is { } logs
+        ? logs.AsSpan(0, n)
         : throw new InvalidOperationException($"group {g} was not expected to need its logs inside the search range");
 
     /// <summary>Σu and Σu² − (Σu)²/n for group g of n rows, log-mean <paramref name="centre"/>, row by row, with
@@ -83,5 +66,5 @@ internal sealed class KeptLogs
 
     /// <summary>True when a group of this reach leaves the series' reach somewhere in the search range: |λ|·reach &gt; 1
     /// at |λ| = <see cref="LambdaLimit"/>, as <see cref="BlockEvaluation"/> tests it.</summary>
-    private static bool Far(double reach) => LambdaLimit * reach > 1;
+    public static bool Far(double reach) => LambdaLimit * reach > 1;
 }

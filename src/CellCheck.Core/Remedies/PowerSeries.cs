@@ -21,7 +21,7 @@ internal static class PowerSeries
         var x = Vector256.Create(2 * Math.Abs(lambda)) * PowerSumTable.Block(table.Reach, b);
         var bound = Vector256.Create(2.0) * PowerSumTable.Block(table.Size, b);
         var negligible = Vector256.Create(GroupedPowerSums.Negligible);
-        var sums = table.Sums.AsSpan(table.Offsets[b], table.Offsets[b + 1] - table.Offsets[b]);
+        var sums = table.BlockSums(b);
         var depth = sums.Length / PowerSumTable.Lanes;
         Vector256<double> sum = Vector256<double>.Zero, squares = Vector256<double>.Zero;
         var alive = Vector256<double>.AllBitsSet;

@@ -1,3 +1,4 @@
+using System.Buffers;
 using System.Runtime.Intrinsics;
 
 namespace CellCheck.Core.Remedies;
@@ -6,20 +7,24 @@ namespace CellCheck.Core.Remedies;
 /// The per-group quantities of <see cref="GroupedPowerSums"/>: each group's log-mean c_g, reach max|e_i|, size and
 /// number of series terms, and the power sums S_k/k! of its centred logs e_i = log y_i − c_g, laid out for
 /// <see cref="PowerSeries"/>: groups in blocks of <see cref="Lanes"/>, block b holding term k of its lanes at
-/// Sums[Offsets[b] + (k − 1)·Lanes + lane] for k up to the block's largest term count (so only the terms a group
-/// can use are stored). Built in parallel over groups; every group's numbers are formed in the same order as the
-/// plain one-row-at-a-time loops (sums in row order, powers by repeated multiplication), so they are the same doubles
-/// (<see cref="BlockPowers"/>).
+/// BlockSums(b)[(k − 1)·Lanes + lane] for k up to the block's largest term count (so only the terms a group can use
+/// are stored). Built in parallel over ranges of whole blocks of about <see cref="ChunkRows"/> rows, whose logs are
+/// formed in a buffer of the range's own (<see cref="ILogSource"/>), read and dropped, so no array of the data's length
+/// is held; every group's numbers are formed in the same order as the plain one-row-at-a-time loops (sums in row
+/// order, powers by repeated multiplication), so they are the same doubles (<see cref="BlockPowers"/>).
 /// </summary>
 internal sealed class PowerSumTable
 {
     /// <summary>Groups per block: the width of a 256-bit vector of doubles.</summary>
     public const int Lanes = 4;
 
-    /// <summary>Groups per parallel work item (a whole number of blocks).</summary>
-    private const int Chunk = 1024;
+    /// <summary>Rows per parallel work item (whole blocks; a block larger than this is an item of its own): the
+    /// logs of one item are formed in a buffer of its own, read, and dropped.</summary>
+    private const int ChunkRows = 1 << 16;
 
-    public PowerSumTable(int[] starts, double[] logs)
+    /// <param name="starts">Group g holds positions starts[g] .. starts[g + 1] − 1 of <paramref name="logs"/>.</param>
+    /// <exception cref="ArgumentException">A value is not positive and finite (<see cref="ILogSource.Failure"/>).</exception>
+    public PowerSumTable(int[] starts, ILogSource logs)
     {
         Groups = starts.Length - 1;
         Blocks = (Groups + Lanes - 1) / Lanes;
@@ -28,51 +33,69 @@ internal sealed class PowerSumTable
         Reach = new double[padded];
         Size = new double[padded];
         Terms = new double[padded];
-        Offsets = new int[Blocks + 1];
-        var chunks = (Groups + Chunk - 1) / Chunk;
-        Parallel.For(0, chunks, chunk =>
+        partOf = new int[Blocks];
+        at = new int[Blocks];
+        length = new int[Blocks];
+        var sums = new double[Groups];
+        var far = new double[]?[Groups];
+        var chunks = Chunks(starts);
+        parts = new double[chunks.Count - 1][];
+        var failed = 0;
+        Parallel.For(0, chunks.Count - 1, i =>
         {
-            for (var g = chunk * Chunk; g < Math.Min(Groups, (chunk + 1) * Chunk); g++)
+            var (firstBlock, endBlock) = (chunks[i], chunks[i + 1]);
+            var (first, end) = (firstBlock * Lanes, Math.Min(Groups, endBlock * Lanes));
+            var from = starts[first];
+            var buffer = ArrayPool<double>.Shared.Rent(starts[end] - from);
+            try
             {
-                var cell = logs.AsSpan(starts[g], starts[g + 1] - starts[g]);
-                Size[g] = cell.Length;
-                if (cell.Length == 0)
+                var chunk = buffer.AsSpan(0, starts[end] - from);
+                if (Volatile.Read(ref failed) != 0 || !logs.TryFill(from, chunk))
                 {
-                    continue;
+                    Volatile.Write(ref failed, 1);
+                    return;
                 }
 
-                var centre = Centre[g] = Statistics.Descriptive.Mean(cell);
-                var reach = 0.0;
-                foreach (var l in cell)
+                for (var g = first; g < end; g++)
                 {
-                    reach = Math.Max(reach, Math.Abs(l - centre));
+                    Describe(g, chunk.Slice(starts[g] - from, starts[g + 1] - starts[g]), sums, far);
                 }
 
-                Reach[g] = reach;
-                Terms[g] = GroupedPowerSums.TermsWithin(cell.Length, reach);
+                parts[i] = Powers(starts, chunk, from, firstBlock, endBlock);
+            }
+            finally
+            {
+                ArrayPool<double>.Shared.Return(buffer);
             }
         });
-        for (var b = 0; b < Blocks; b++)
+        if (failed != 0)
         {
-            var depth = 0.0;
-            for (var lane = 0; lane < Lanes; lane++)
-            {
-                depth = Math.Max(depth, Terms[(b * Lanes) + lane]);
-            }
-
-            Offsets[b + 1] = Offsets[b] + ((int)depth * Lanes);
+            throw logs.Failure();
         }
 
-        Sums = new double[Offsets[Blocks]];
-        Parallel.For(0, chunks, chunk =>
+        for (var i = 0; i < parts.Length; i++)
         {
-            Span<double> accumulated = stackalloc double[BlockPowers.Scratch];
-            for (var b = chunk * Chunk / Lanes; b < Math.Min(Blocks, (chunk + 1) * Chunk / Lanes); b++)
+            Stored += parts[i].Length;
+            for (int b = chunks[i], next = 0; b < chunks[i + 1]; b++)
             {
-                BlockPowers.Fill(starts, logs, this, b, Sums.AsSpan(Offsets[b], Offsets[b + 1] - Offsets[b]), accumulated);
+                (partOf[b], at[b], length[b]) = (i, next, Depth(b) * Lanes);
+                next += length[b];
             }
-        });
+        }
+
+        foreach (var sum in sums)
+        {
+            SumLog += sum;
+        }
+
+        Kept = new KeptLogs(far);
     }
+
+    // the sums of each work item in an array of their own (no copy into one): block b's at parts[partOf[b]][at[b]..]
+    private readonly double[][] parts;
+    private readonly int[] partOf;
+    private readonly int[] at;
+    private readonly int[] length;
 
     public int Groups { get; }
 
@@ -90,12 +113,93 @@ internal sealed class PowerSumTable
     /// <summary>Series terms kept for group g (<see cref="GroupedPowerSums.TermsWithin"/>; 0 when empty).</summary>
     public double[] Terms { get; }
 
-    /// <summary>Start of block b's terms in <see cref="Sums"/>; block b holds (Offsets[b + 1] − Offsets[b])/Lanes terms.</summary>
-    public int[] Offsets { get; }
+    /// <summary>Number of power sums stored.</summary>
+    public int Stored { get; }
 
-    /// <summary>S_k/k! by block, term and lane (see the class summary).</summary>
-    public double[] Sums { get; }
+    /// <summary>S_k/k! of block b by term and lane: term k of the lanes at (k − 1)·Lanes, for k up to the block's largest
+    /// term count (see the class summary).</summary>
+    public ReadOnlySpan<double> BlockSums(int b) => parts[partOf[b]].AsSpan(at[b], length[b]);
+
+    /// <summary>Σ log y: each group's logs summed in order, the groups' sums added in group order.</summary>
+    public double SumLog { get; }
+
+    /// <summary>The logs of the groups that may be evaluated row by row.</summary>
+    public KeptLogs Kept { get; }
 
     /// <summary>A vector of <see cref="Lanes"/> per-group values of block b.</summary>
     public static Vector256<double> Block(double[] values, int b) => Vector256.Create(values.AsSpan(b * Lanes, Lanes));
+
+    /// <summary>The work items: item i holds blocks [i] .. [i + 1] − 1, about <see cref="ChunkRows"/> rows each.</summary>
+    private List<int> Chunks(int[] starts)
+    {
+        var chunks = new List<int> { 0 };
+        for (var b = 0; b < Blocks; b++)
+        {
+            var end = Math.Min(Groups, (b + 1) * Lanes);
+            if (b + 1 == Blocks || starts[end] - starts[chunks[^1] * Lanes] >= ChunkRows)
+            {
+                chunks.Add(b + 1);
+            }
+        }
+
+        return chunks;
+    }
+
+    /// <summary>Size, log-mean, reach and term count of group g from its logs; the logs' sum, and the logs themselves
+    /// when the group may be evaluated row by row (<see cref="KeptLogs.Far"/>).</summary>
+    private void Describe(int g, ReadOnlySpan<double> cell, double[] sums, double[]?[] far)
+    {
+        Size[g] = cell.Length;
+        if (cell.Length == 0)
+        {
+            return;
+        }
+
+        var centre = Centre[g] = Statistics.Descriptive.Mean(cell);
+        var (reach, sum) = (0.0, 0.0);
+        foreach (var l in cell)
+        {
+            reach = Math.Max(reach, Math.Abs(l - centre));
+            sum += l;
+        }
+
+        (Reach[g], sums[g]) = (reach, sum);
+        Terms[g] = GroupedPowerSums.TermsWithin(cell.Length, reach);
+        far[g] = KeptLogs.Far(reach) ? cell.ToArray() : null;
+    }
+
+    /// <summary>The power sums of blocks <paramref name="firstBlock"/> .. <paramref name="endBlock"/> − 1, one after
+    /// another as <see cref="BlockSums"/> reads them, from their logs (<paramref name="logs"/> starts at position <paramref name="from"/>).</summary>
+    private double[] Powers(int[] starts, ReadOnlySpan<double> logs, int from, int firstBlock, int endBlock)
+    {
+        var length = 0;
+        for (var b = firstBlock; b < endBlock; b++)
+        {
+            length += Depth(b) * Lanes;
+        }
+
+        var sums = new double[length];
+        Span<double> accumulated = stackalloc double[BlockPowers.Scratch];
+        var at = 0;
+        for (var b = firstBlock; b < endBlock; b++)
+        {
+            var size = Depth(b) * Lanes;
+            BlockPowers.Fill(starts, logs, from, this, b, sums.AsSpan(at, size), accumulated);
+            at += size;
+        }
+
+        return sums;
+    }
+
+    /// <summary>The most terms of a group of block b.</summary>
+    private int Depth(int b)
+    {
+        var depth = 0.0;
+        for (var lane = 0; lane < Lanes; lane++)
+        {
+            depth = Math.Max(depth, Terms[(b * Lanes) + lane]);
+        }
+
+        return (int)depth;
+    }
 }

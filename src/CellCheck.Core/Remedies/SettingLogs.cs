@@ -1,50 +1,60 @@
-using CellCheck.Core.Statistics;
-
 namespace CellCheck.Core.Remedies;
 
 /// <summary>
-/// log y in a setting order (<see cref="SettingOrder"/>), for the Box-Cox profile of the blocked model: computed in
-/// parallel over ranges of cells (each log on its own, each cell sorted by setting as it is read), with the same check
-/// and message as one pass in order (the first value in that order that is not positive and finite is the one reported).
+/// log y in a setting order (<see cref="SettingOrder"/>), for the Box-Cox profile of the blocked model: each range of
+/// positions is written from the cells it covers, each cell sorted by setting as it is read, so no order and no logs
+/// of the data's length are held; any range may be written side by side with others. The first value in that order
+/// that is not positive and finite is the one named in the error.
 /// </summary>
-internal static class SettingLogs
+internal sealed class SettingLogs<TValues>(TValues y, SettingOrder settings) : ILogSource
+    where TValues : struct, IIndexedValues
 {
-    /// <summary>log y at each position of the setting order of <paramref name="settings"/>.</summary>
-    /// <exception cref="ArgumentException">A value is not positive and finite.</exception>
-    public static double[] Of<TValues>(TValues y, SettingOrder settings)
-        where TValues : IIndexedValues
-    {
-        var logs = new double[settings.Count];
-        var failed = 0;
-        var cursor = settings.NewCursor();
-        var cellStarts = settings.CellStarts;
-        GroupChunks.ForEach(cellStarts, (first, end) =>
-        {
-            var order = new int[GroupChunks.LargestSize(cellStarts, first, end)];
-            for (var c = first; c < end && Volatile.Read(ref failed) == 0; c++)
-            {
-                settings.CellOrder(c, cursor, order);
-                var from = cellStarts[c];
-                for (var k = 0; k < cellStarts[c + 1] - from; k++)
-                {
-                    var v = y[order[k]];
-                    if (!(v > 0) || !double.IsFinite(v))
-                    {
-                        Volatile.Write(ref failed, 1);
-                        return;
-                    }
+    public int Count => settings.Count;
 
-                    logs[from + k] = Math.Log(v);
-                }
-            }
-        });
-        if (failed != 0)
+    public bool TryFill(int from, Span<double> target)
+    {
+        var cellStarts = settings.CellStarts;
+        var end = from + target.Length;
+        var c = Array.BinarySearch(cellStarts, from);
+        c = c >= 0 ? c : ~c - 1; // the cell holding position from (an empty cell holds nothing: the last of equal starts)
+        while (c + 1 < cellStarts.Length - 1 && cellStarts[c + 1] <= from)
         {
-            var order = settings.Permutation();
-            var k = Array.FindIndex(order, i => !(y[i] > 0) || !double.IsFinite(y[i]));
-            throw new ArgumentException($"Box-Cox needs positive finite values; value {order[k]} is {y[order[k]]}", nameof(y));
+            c++;
         }
 
-        return logs;
+        var order = System.Buffers.ArrayPool<int>.Shared.Rent(settings.LargestCell);
+        var next = System.Buffers.ArrayPool<int>.Shared.Rent(settings.LargestCell);
+        try
+        {
+            for (; c < cellStarts.Length - 1 && cellStarts[c] < end; c++)
+            {
+                settings.CellOrder(c, order, next);
+                var cellFrom = cellStarts[c];
+                for (var p = Math.Max(from, cellFrom); p < Math.Min(end, cellStarts[c + 1]); p++)
+                {
+                    var v = y[order[p - cellFrom]];
+                    if (!(v > 0) || !double.IsFinite(v))
+                    {
+                        return false;
+                    }
+
+                    target[p - from] = Math.Log(v);
+                }
+            }
+
+            return true;
+        }
+        finally
+        {
+            System.Buffers.ArrayPool<int>.Shared.Return(order);
+            System.Buffers.ArrayPool<int>.Shared.Return(next);
+        }
+    }
+
+    public ArgumentException Failure()
+    {
+        var order = settings.Permutation();
+        var k = Array.FindIndex(order, i => !(y[i] > 0) || !double.IsFinite(y[i]));
+        return new ArgumentException($"Box-Cox needs positive finite values; value {order[k]} is {y[order[k]]}", nameof(y));
     }
 }

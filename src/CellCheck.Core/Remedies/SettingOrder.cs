@@ -28,18 +28,33 @@ internal sealed class SettingOrder(int[] settings, int[] cellStarts, int[] start
     /// order alike.</summary>
     public int[] CellStarts => cellStarts;
 
-    /// <summary>A cursor for <see cref="CellOrder"/>: where each setting's next position goes. One cursor serves every
-    /// cell once, and cells read side by side (each writes only its own settings' slots).</summary>
-    public int[] NewCursor() => (int[])Starts.Clone();
-
     /// <summary>Writes the grouped positions of cell <paramref name="c"/> in setting order into the first positions of
-    /// <paramref name="target"/>: position CellStarts[c] + k of the setting order is target[k].</summary>
-    public void CellOrder(int c, int[] cursor, Span<int> target)
+    /// <paramref name="target"/>: position CellStarts[c] + k of the setting order is target[k]. A counting sort on the
+    /// cell's own settings (numbered cell by cell in order of first appearance, so the cell's first position holds the
+    /// lowest of a contiguous range), so any cell may be read any number of times, side by side with others.</summary>
+    /// <param name="next">Scratch of at least the cell's size.</param>
+    public void CellOrder(int c, Span<int> target, Span<int> next)
     {
-        var from = cellStarts[c];
-        for (var i = from; i < cellStarts[c + 1]; i++)
+        var (from, end) = (cellStarts[c], cellStarts[c + 1]);
+        if (from == end)
         {
-            target[cursor[settings[i]]++ - from] = i;
+            return;
+        }
+
+        var (low, high) = (settings[from], settings[from]);
+        for (var i = from + 1; i < end; i++)
+        {
+            high = Math.Max(high, settings[i]);
+        }
+
+        for (var g = low; g <= high; g++)
+        {
+            next[g - low] = Starts[g] - from;
+        }
+
+        for (var i = from; i < end; i++)
+        {
+            target[next[settings[i] - low]++] = i;
         }
     }
 
@@ -47,10 +62,10 @@ internal sealed class SettingOrder(int[] settings, int[] cellStarts, int[] start
     public int[] Permutation()
     {
         var order = new int[Count];
-        var cursor = NewCursor();
+        var next = new int[LargestCell];
         for (var c = 0; c < Cells; c++)
         {
-            CellOrder(c, cursor, order.AsSpan(cellStarts[c]));
+            CellOrder(c, order.AsSpan(cellStarts[c]), next);
         }
 
         return order;

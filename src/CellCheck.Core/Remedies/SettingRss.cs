@@ -91,12 +91,12 @@ internal sealed class SettingRss : IResidualSumOfSquares
     {
         var total = 0.0;
         var means = new double[Starts.Length - 1];
-        var cursor = Order.NewCursor();
         var order = new int[Order.LargestCell];
+        var next = new int[Order.LargestCell];
         var g = 0;
         for (var c = 0; c < Order.Cells; c++)
         {
-            Order.CellOrder(c, cursor, order);
+            Order.CellOrder(c, order, next);
             var from = Order.CellStarts[c];
             for (; g < means.Length && Starts[g] < Order.CellStarts[c + 1]; g++)
             {

@@ -97,7 +97,20 @@ public sealed class GroupedPowerSumsTests
     public void The_power_sums_of_each_group_equal_the_plain_row_by_row_loop_bit_for_bit(double logSpread)
     {
         var (starts, logs) = ManyGroups(logSpread, seed: 9);
-        var table = new PowerSumTable(starts, logs);
+        var table = new PowerSumTable(starts, new HeldLogs(logs));
+        var sumLog = 0.0;
+        for (var g = 0; g < table.Groups; g++)
+        {
+            var groupSum = 0.0;
+            foreach (var l in logs.AsSpan(starts[g], starts[g + 1] - starts[g]))
+            {
+                groupSum += l;
+            }
+
+            sumLog += groupSum;
+        }
+
+        Assert.Equal(sumLog, table.SumLog);
         for (var g = 0; g < table.Groups; g++)
         {
             var cell = logs.AsSpan(starts[g], starts[g + 1] - starts[g]);
@@ -121,8 +134,7 @@ public sealed class GroupedPowerSumsTests
             for (var k = 1; k <= terms; k++)
             {
                 factorial *= k;
-                var offset = table.Offsets[g / PowerSumTable.Lanes] + (g % PowerSumTable.Lanes);
-                Assert.Equal(expected[k] / factorial, table.Sums[offset + ((k - 1) * PowerSumTable.Lanes)]);
+                Assert.Equal(expected[k] / factorial, table.BlockSums(g / PowerSumTable.Lanes)[(g % PowerSumTable.Lanes) + ((k - 1) * PowerSumTable.Lanes)]);
             }
         }
     }
@@ -152,11 +164,20 @@ public sealed class GroupedPowerSumsTests
         double[] logs = [1.0, 1.1, 0.9, 2.0, 2.3, 1.7, 3.0, 3.2, 2.8];
         int[] starts = [0, 3, 6, 9, 9];
         var reach = new double[] { 0.1, 0.3, 0.2, 0 };
-        var kept = new KeptLogs(starts, logs, reach);
+        Assert.Equal([false, true, false, false], reach.Select(KeptLogs.Far));
+        var kept = new KeptLogs([null, [2.0, 2.3, 1.7], null, null]);
         Assert.Equal(3, kept.Count);
         Assert.Equal(new[] { 2.0, 2.3, 1.7 }, kept.Of(1, 3).ToArray());
         Assert.Throws<InvalidOperationException>(() => kept.Of(0, 3).Length);
         Assert.Throws<InvalidOperationException>(() => kept.Of(2, 3).Length);
+
+        // the table keeps the logs of exactly the groups its reaches call far, formed range by range
+        var (many, manyLogs) = ManyGroups(0.9, seed: 12);
+        var table = new PowerSumTable(many, new HeldLogs(manyLogs));
+        var far = Enumerable.Range(0, table.Groups).Where(g => KeptLogs.Far(table.Reach[g])).ToArray();
+        Assert.NotEmpty(far);
+        Assert.Equal(far.Sum(g => many[g + 1] - many[g]), table.Kept.Count);
+        Assert.All(far, g => Assert.Equal(manyLogs[many[g]..many[g + 1]], table.Kept.Of(g, many[g + 1] - many[g]).ToArray()));
     }
 
     [Fact]

@@ -47,9 +47,16 @@ internal sealed class PlainGroupedProfile
         within = new double[groups];
         means = between is null ? null : new double[groups];
         betweenResiduals = between is null ? null : new double[groups];
-        foreach (var l in logs)
+        for (var g = 0; g < groups; g++)
         {
-            sumLog += l;
+            // Σ log y: each group's logs in order, then the groups' sums in group order
+            var groupSum = 0.0;
+            foreach (var l in logs.AsSpan(starts[g], starts[g + 1] - starts[g]))
+            {
+                groupSum += l;
+            }
+
+            sumLog += groupSum;
         }
 
         for (var g = 0; g < groups; g++)

@@ -180,7 +180,17 @@ public sealed class CellBlockResidualsTests
         var expected = Enumerable.Range(0, setting.Length).OrderBy(i => setting[i]).ThenBy(i => i).ToArray();
         Assert.Equal(expected, settings.Order.Permutation());
         var y = partition.Values.Values;
-        Assert.Equal(expected.Select(i => Math.Log(y[i])), SettingLogs.Of(new ShiftedValues(y, 0), settings.Order));
+        var source = new SettingLogs<ShiftedValues>(new ShiftedValues(y, 0), settings.Order);
+        var logs = new double[source.Count];
+        Assert.True(source.TryFill(0, logs));
+        Assert.Equal(expected.Select(i => Math.Log(y[i])), logs);
+        foreach (var (from, length) in new[] { (1, 7), (13, 40), (logs.Length - 5, 5), (logs.Length / 3, logs.Length / 3) })
+        {
+            var part = new double[length]; // a range that starts and ends inside cells
+            Assert.True(source.TryFill(from, part));
+            Assert.Equal(logs[from..(from + length)], part);
+        }
+
         for (var g = 0; g < settings.Starts.Length - 1; g++)
         {
             Assert.All(expected[settings.Starts[g]..settings.Starts[g + 1]], i => Assert.Equal(g, setting[i]));
@@ -197,7 +207,9 @@ public sealed class CellBlockResidualsTests
         var (first, second) = (order[^3], order[5]);
         y[first] = -1;
         y[second] = 0;
-        var error = Assert.Throws<ArgumentException>(() => SettingLogs.Of(new ShiftedValues(y, 0), settings.Order));
+        var source = new SettingLogs<ShiftedValues>(new ShiftedValues(y, 0), settings.Order);
+        Assert.False(source.TryFill(0, new double[source.Count]));
+        var error = Assert.Throws<ArgumentException>(() => new GroupedPowerSums(settings.Starts, source, settings.Between));
         Assert.StartsWith($"Box-Cox needs positive finite values; value {second} is 0", error.Message, StringComparison.Ordinal);
     }
 

@@ -44,18 +44,37 @@ public static class ResponseAnalyzer
             step();
             WorkingMemory.Release(rows);
         };
-        Parallel.Invoke(new ParallelOptions { MaxDegreeOfParallelism = rows > WorkingMemory.ReleaseRows ? 2 : -1 },
-            Releasing(() => remedyFits = early ? Remedies.RemedyFits.Compute(data, spec, partition, residuals.Diagnostics!.Model, column, 0, wantsYeoJohnson: false) : null),
-            () => primary = calibration.MonteCarlo ? PrimaryDecisions.Statistics(partition, residuals, calibration) : null,
-            Releasing(() =>
+        var remedyStep = Releasing(() => remedyFits = early ? Remedies.RemedyFits.Compute(data, spec, partition, residuals.Diagnostics!.Model, column, 0, wantsYeoJohnson: false) : null);
+        Action primaryStep = () => primary = calibration.MonteCarlo ? PrimaryDecisions.Statistics(partition, residuals, calibration) : null;
+        Action cellStep = () => cells = CellChecks.Run(partition, residuals, column.Origin, options, column.Name);
+        var spreadStep = Releasing(() => spread = SpreadChecks.Run(partition, residuals, cells, options.Alpha));
+        var pooledStep = Releasing(() => pooled = PooledChecks.Run(residuals, options.Alpha));
+        var orderStep = Releasing(() => order = OrderChecks.Run(data, partition, residuals, options.Alpha));
+        var modelStep = Releasing(() => model = ModelChecks.Run(partition, data.Blocks, spec, residuals, data.SourceLines, options.Alpha));
+        Action resolutionStep = () => resolution = RecordingStep.Summarize(partition.Values, column.Decimals, residuals.ResidualSd);
+        if (rows > WorkingMemory.ReleaseRows)
+        {
+            // on large data each group's working copies are tens to hundreds of megabytes: the largest (the order checks,
+            // then the transformation fits) run beside the smallest, so that no two large copies are held at once
+            Parallel.Invoke(orderStep, () =>
             {
-                cells = CellChecks.Run(partition, residuals, column.Origin, options, column.Name);
-                spread = SpreadChecks.Run(partition, residuals, cells, options.Alpha);
-            }),
-            Releasing(() => pooled = PooledChecks.Run(residuals, options.Alpha)),
-            Releasing(() => order = OrderChecks.Run(data, partition, residuals, options.Alpha)),
-            Releasing(() => model = ModelChecks.Run(partition, data.Blocks, spec, residuals, data.SourceLines, options.Alpha)),
-            () => resolution = RecordingStep.Summarize(partition.Values, column.Decimals, residuals.ResidualSd));
+                cellStep();
+                modelStep();
+                resolutionStep();
+                primaryStep();
+            });
+            Parallel.Invoke(spreadStep, pooledStep);
+            remedyStep();
+        }
+        else
+        {
+            Parallel.Invoke(remedyStep, primaryStep, () =>
+            {
+                cellStep();
+                spreadStep();
+            }, pooledStep, orderStep, modelStep, resolutionStep);
+        }
+
         var assumptions = PrimaryDecisions.Decide(partition, residuals, pooled, spread, order, calibration, options.Alpha, resolution, options.Simulation, primary);
         var verdict = VerdictWriter.Write(new VerdictInputs(census, cells, pooled, spread, partition.Factors, assumptions, calibration.Operating, model) { Resolution = resolution }, options);
         return new ResponseReport(column.Name, column.Unit, partition.Values.Count, data.Excluded[response], census, cells, pooled, spread, verdict)

@@ -98,7 +98,7 @@ public sealed class GroupedPowerSumsTests
     {
         var (starts, logs) = ManyGroups(logSpread, seed: 9);
         var table = new PowerSumTable(starts, new HeldLogs(logs));
-        var sumLog = 0.0;
+        var sumLog = default(Core.Statistics.NeumaierSum);
         for (var g = 0; g < table.Groups; g++)
         {
             var groupSum = 0.0;
@@ -107,10 +107,10 @@ public sealed class GroupedPowerSumsTests
                 groupSum += l;
             }
 
-            sumLog += groupSum;
+            sumLog.Add(groupSum);
         }
 
-        Assert.Equal(sumLog, table.SumLog);
+        Assert.Equal(sumLog.Value, table.SumLog);
         for (var g = 0; g < table.Groups; g++)
         {
             var cell = logs.AsSpan(starts[g], starts[g + 1] - starts[g]);

@@ -47,18 +47,20 @@ internal sealed class PlainGroupedProfile
         within = new double[groups];
         means = between is null ? null : new double[groups];
         betweenResiduals = between is null ? null : new double[groups];
+        var total = default(Core.Statistics.NeumaierSum);
         for (var g = 0; g < groups; g++)
         {
-            // Σ log y: each group's logs in order, then the groups' sums in group order
+            // Σ log y: each group's logs in order, then the groups' sums in group order, compensated
             var groupSum = 0.0;
             foreach (var l in logs.AsSpan(starts[g], starts[g + 1] - starts[g]))
             {
                 groupSum += l;
             }
 
-            sumLog += groupSum;
+            total.Add(groupSum);
         }
 
+        sumLog = total.Value;
         for (var g = 0; g < groups; g++)
         {
             var cell = logs.AsSpan(starts[g], starts[g + 1] - starts[g]);

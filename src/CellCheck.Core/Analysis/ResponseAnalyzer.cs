@@ -21,7 +21,7 @@ public static class ResponseAnalyzer
         ArgumentNullException.ThrowIfNull(options);
         spec ??= ModelSpec.Full(data.Factors.Count);
         var column = data.Responses[response];
-        var partition = CellPartition.Build(data.Factors, column.Values, data.Blocks);
+        var partition = column.PartitionBy(data.Factors, data.Blocks);
         var census = CensusBuilder.Build(partition);
         var source = ResidualSources.For(data, spec, ModelName(data, spec));
         var residuals = source.Compute(partition);

@@ -43,9 +43,9 @@ public sealed class DesignData
 
         foreach (var r in responses)
         {
-            if (r.Values.Length != sourceLines.Length)
+            if (r.Length != sourceLines.Length)
             {
-                throw new ArgumentException($"response {r.Name} has {r.Values.Length} rows, expected {sourceLines.Length}", nameof(responses));
+                throw new ArgumentException($"response {r.Name} has {r.Length} rows, expected {sourceLines.Length}", nameof(responses));
             }
         }
 

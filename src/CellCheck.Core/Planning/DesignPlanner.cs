@@ -34,7 +34,7 @@ public static class DesignPlanner
     private static ResponsePlan PlanResponse(DesignData data, ModelSpec spec, PlannedDesign design, PlanRequest request, int response)
     {
         var column = data.Responses[response];
-        var partition = CellPartition.Build(data.Factors, column.Values, data.Blocks);
+        var partition = column.PartitionBy(data.Factors, data.Blocks);
         var census = CensusBuilder.Build(partition);
         var residuals = ResidualSources.For(data, spec, "plan").Compute(partition);
         var current = census.Balanced ? census.MinReplicates : (int)Math.Floor(census.Rows / census.Combinations);

@@ -23,7 +23,7 @@ public static class RemedyAnalyzer
         spec ??= ModelSpec.Full(data.Factors.Count);
         var column = data.Responses[response];
         var shift = request?.Shift ?? 0;
-        var partition = before.Partition ?? CellPartition.Build(data.Factors, column.Values, data.Blocks);
+        var partition = before.Partition ?? column.PartitionBy(data.Factors, data.Blocks);
         var wantsYeoJohnson = request is { Family: PowerFamily.YeoJohnson, Power: null };
         var fits = before.RemedyFits is { } early && early.Serves(shift, wantsYeoJohnson)
             ? early
@@ -38,7 +38,7 @@ public static class RemedyAnalyzer
         double? slopeAfter = null;
         IReadOnlyList<ComparisonRow> comparison = [];
         var transformed = choice is null ? null : ResponseTransform.Apply(column, partition.RowOrder, choice);
-        if (transformed is not null && !(double.IsFinite(transformed.Origin) && partition.RowOrder.All(r => double.IsFinite(transformed.Values[r]))))
+        if (transformed is not null && !(double.IsFinite(transformed.Origin) && AllFinite(transformed.Values, partition.RowOrder)))
         {
             (choice, transformed, notApplied) = (null, null, RemedyReason.NotFinite);
         }
@@ -121,4 +121,6 @@ public static class RemedyAnalyzer
 
         return new ProjectedRss(x);
     }
+
+    private static bool AllFinite(double[] values, int[] rows) => rows.All(r => double.IsFinite(values[r]));
 }

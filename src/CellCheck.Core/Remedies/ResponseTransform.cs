@@ -16,14 +16,15 @@ public static class ResponseTransform
         ArgumentNullException.ThrowIfNull(column);
         ArgumentNullException.ThrowIfNull(rows);
         ArgumentNullException.ThrowIfNull(choice);
-        var values = new double[column.Values.Length];
+        var source = column.Values;
+        var values = new double[source.Length];
         Array.Fill(values, double.NaN);
         var y0 = column.Origin + choice.Shift;
         var relative = choice.Family == PowerFamily.BoxCox && y0 > 0;
         var origin = relative ? choice.Apply(column.Origin) : 0.0;
         foreach (var row in rows)
         {
-            var d = column.Values[row];
+            var d = source[row];
             if (!relative)
             {
                 values[row] = choice.Apply(column.Origin + d);

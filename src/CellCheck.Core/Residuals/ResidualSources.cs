@@ -20,7 +20,7 @@ public static class ResidualSources
         }
 
         // the QR fit holds the dense n × p design matrix; beyond DenseLimit values it would not fit in memory
-        var rows = data.Responses.Count == 0 ? 0 : (double)data.Responses[0].Values.Length;
+        var rows = (double)data.RowCount;
         var columns = 1.0 + data.Blocks.Sum(b => b.Levels.Count - 1.0) + spec.Terms.Sum(t => t.Factors.Aggregate(1.0, (product, f) => product * Math.Max(1, data.Factors[f].IsNumeric ? 1 : data.Factors[f].Levels.Count - 1)));
         IResidualSource dense = rows * columns <= DenseLimit || !full
             ? new ModelResiduals(data.Blocks, spec, modelName)

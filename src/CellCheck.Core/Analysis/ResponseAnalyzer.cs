@@ -21,7 +21,11 @@ public static class ResponseAnalyzer
         ArgumentNullException.ThrowIfNull(options);
         spec ??= ModelSpec.Full(data.Factors.Count);
         var column = data.Responses[response];
+        // on large data: what reading left (its row-wide working arrays) and then what splitting left (the file-order
+        // values it took over, each row's cell) is collected before the next step takes fresh memory beside it
+        WorkingMemory.Release(data.RowCount);
         var partition = column.PartitionBy(data.Factors, data.Blocks);
+        WorkingMemory.Release(data.RowCount);
         var census = CensusBuilder.Build(partition);
         var source = ResidualSources.For(data, spec, ModelName(data, spec));
         var residuals = source.Compute(partition);

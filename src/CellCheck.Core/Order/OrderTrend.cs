@@ -37,14 +37,15 @@ public static class OrderTrend
     }
 
     /// <summary>Regresses the residuals on the given run positions (same length, same order); consecutive positions
-    /// are counted on from their start, the same doubles as if they were held.</summary>
+    /// are counted on from their start and whole ones read from their offsets, the same doubles as if they were held.</summary>
     /// <exception cref="ArgumentException">The lengths differ or a value is not finite.</exception>
     public static OrderTrendResult Test(ReadOnlySpan<double> residuals, RunPositions runOrder)
     {
         ArgumentNullException.ThrowIfNull(runOrder);
-        if (!runOrder.IsConsecutive || runOrder.Length == 0)
+        if (runOrder.Length == 0 || (!runOrder.IsConsecutive && !runOrder.IsWhole) || (runOrder.IsWhole && runOrder.Offsets.Contains(int.MinValue)))
         {
-            return Test(residuals, runOrder.Held);
+            // held as doubles, or with a missing position (refused as the held form refuses it)
+            return runOrder.IsWhole ? Test(residuals, runOrder.ToArray()) : Test(residuals, runOrder.Held);
         }
 
         if (runOrder.Length != residuals.Length)
@@ -52,7 +53,7 @@ public static class OrderTrend
             throw new ArgumentException($"There are {residuals.Length} residuals but {runOrder.Length} run-order values.", nameof(runOrder));
         }
 
-        return Fit(residuals, new CountedPositions(runOrder[0]));
+        return runOrder.IsWhole ? Fit(residuals, new OffsetPositions(runOrder.Offsets, runOrder.First)) : Fit(residuals, new CountedPositions(runOrder.First));
     }
 
     private static OrderTrendResult Fit<TPositions>(ReadOnlySpan<double> residuals, TPositions runOrder)

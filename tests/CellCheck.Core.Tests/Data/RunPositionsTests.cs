@@ -28,19 +28,23 @@ public sealed class RunPositionsTests
     }
 
     [Theory]
-    [InlineData("a tie")]
-    [InlineData("a gap")]
-    [InlineData("a missing position")]
-    [InlineData("halves")]
-    [InlineData("minus zero start")]
-    [InlineData("beyond 4e15")]
-    public void Any_other_positions_are_held_as_given(string kind)
+    [InlineData("a tie", true)]
+    [InlineData("a gap", true)]
+    [InlineData("a missing position", true)]
+    [InlineData("times in whole seconds", true)]
+    [InlineData("halves", false)]
+    [InlineData("minus zero start", false)]
+    [InlineData("beyond 4e15", false)]
+    [InlineData("offsets past 32 bits", false)]
+    public void Whole_positions_are_held_as_offsets_and_any_others_as_given(string kind, bool whole)
     {
         var values = Enumerable.Range(0, 200).Select(i => kind switch
         {
             "halves" => 0.5 + i,
             "minus zero start" => i == 0 ? -0.0 : i,
             "beyond 4e15" => 5e15 + i,
+            "times in whole seconds" => 1.7e9 + (i * 37) - (i % 3),
+            "offsets past 32 bits" => i * 3e7,
             _ => 1.0 + i,
         }).ToArray();
         values[150] = kind switch { "a tie" => values[149], "a gap" => values[150] + 1, "a missing position" => double.NaN, _ => values[150] };
@@ -48,9 +52,11 @@ public sealed class RunPositionsTests
         var positions = RunPositions.From(values);
 
         Assert.False(positions.IsConsecutive);
+        Assert.Equal(whole, positions.IsWhole);
         Assert.Equal(values.Select(BitConverter.DoubleToInt64Bits), positions.ToArray().Select(BitConverter.DoubleToInt64Bits));
-        Assert.Equal(values.Select(BitConverter.DoubleToInt64Bits), positions.Held.ToArray().Select(BitConverter.DoubleToInt64Bits));
+        Assert.Equal(whole ? [] : values.Select(BitConverter.DoubleToInt64Bits), positions.Held.ToArray().Select(BitConverter.DoubleToInt64Bits));
         Assert.Equal(values.Skip(140).Take(20), positions.Slice(140, 20).ToArray());
+        Assert.Equal(values[155], positions.Slice(140, 20)[15]);
     }
 
     [Fact]

@@ -34,6 +34,9 @@ public sealed class OrderTrendTests
         var numbered = OrderTrend.Test(residuals);
         var oneToN = OrderTrend.Test(residuals, Enumerable.Range(1, 5000).Select(i => (double)i).ToArray().AsSpan());
 
+        var gapped = held.Select((t, i) => t + (i / 7)).ToArray(); // whole seconds with gaps: held as offsets
+        Assert.True(RunPositions.From(gapped).IsWhole);
+        Assert.Equal(OrderTrend.Test(residuals, gapped.AsSpan()), OrderTrend.Test(residuals, RunPositions.From(gapped)));
         Assert.Equal(asArray, counted);
         Assert.Equal(oneToN, numbered);
         Assert.Throws<ArgumentException>(() => OrderTrend.Test(residuals, RunPositions.Consecutive(1, 4999)));

@@ -38,7 +38,7 @@ internal static class Phases
         var options = new AnalysisOptions(file.Alpha, file.Adjust);
         var spec = ModelSpecs.From(file);
         var column = data.Responses[0];
-        var partition = CellPartition.Build(data.Factors, column.Values, data.Blocks);
+        var partition = column.PartitionBy(data.Factors, data.Blocks); // as the tool does: the column hands its values over
         Mark("partition");
         var census = CensusBuilder.Build(partition);
         Mark("census");

@@ -33,13 +33,10 @@ internal sealed class PowerSumTable
         Reach = new double[padded];
         Size = new double[padded];
         Terms = new double[padded];
-        partOf = new int[Blocks];
-        at = new int[Blocks];
-        length = new int[Blocks];
         var sums = new double[Groups];
         var far = new double[]?[Groups];
-        var chunks = Chunks(starts);
-        parts = new double[chunks.Count - 1][];
+        var chunks = BlockSumParts.Cut(starts, Lanes, ChunkRows);
+        var parts = new double[chunks.Count - 1][];
         var failed = 0;
         Parallel.For(0, chunks.Count - 1, i =>
         {
@@ -73,16 +70,7 @@ internal sealed class PowerSumTable
             throw logs.Failure();
         }
 
-        for (var i = 0; i < parts.Length; i++)
-        {
-            Stored += parts[i].Length;
-            for (int b = chunks[i], next = 0; b < chunks[i + 1]; b++)
-            {
-                (partOf[b], at[b], length[b]) = (i, next, Depth(b) * Lanes);
-                next += length[b];
-            }
-        }
-
+        sumParts = new BlockSumParts(parts, chunks, b => Depth(b) * Lanes);
         var sumLog = default(Statistics.NeumaierSum);
         foreach (var sum in sums)
         {
@@ -93,11 +81,7 @@ internal sealed class PowerSumTable
         Kept = new KeptLogs(far);
     }
 
-    // the sums of each work item in an array of their own (no copy into one): block b's at parts[partOf[b]][at[b]..]
-    private readonly double[][] parts;
-    private readonly int[] partOf;
-    private readonly int[] at;
-    private readonly int[] length;
+    private readonly BlockSumParts sumParts;
 
     public int Groups { get; }
 
@@ -116,11 +100,11 @@ internal sealed class PowerSumTable
     public double[] Terms { get; }
 
     /// <summary>Number of power sums stored.</summary>
-    public int Stored { get; }
+    public int Stored => sumParts.Stored;
 
     /// <summary>S_k/k! of block b by term and lane: term k of the lanes at (k − 1)·Lanes, for k up to the block's largest
     /// term count (see the class summary).</summary>
-    public ReadOnlySpan<double> BlockSums(int b) => parts[partOf[b]].AsSpan(at[b], length[b]);
+    public ReadOnlySpan<double> BlockSums(int b) => sumParts.Of(b);
 
     /// <summary>Σ log y: each group's logs summed in order, the groups' sums added in group order with Neumaier's (1974)
     /// compensation, so the value does not depend on how the work is cut. (A plain sum of the ten million logs of the
@@ -132,22 +116,6 @@ internal sealed class PowerSumTable
 
     /// <summary>A vector of <see cref="Lanes"/> per-group values of block b.</summary>
     public static Vector256<double> Block(double[] values, int b) => Vector256.Create(values.AsSpan(b * Lanes, Lanes));
-
-    /// <summary>The work items: item i holds blocks [i] .. [i + 1] − 1, about <see cref="ChunkRows"/> rows each.</summary>
-    private List<int> Chunks(int[] starts)
-    {
-        var chunks = new List<int> { 0 };
-        for (var b = 0; b < Blocks; b++)
-        {
-            var end = Math.Min(Groups, (b + 1) * Lanes);
-            if (b + 1 == Blocks || starts[end] - starts[chunks[^1] * Lanes] >= ChunkRows)
-            {
-                chunks.Add(b + 1);
-            }
-        }
-
-        return chunks;
-    }
 
     /// <summary>Size, log-mean, reach and term count of group g from its logs; the logs' sum, and the logs themselves
     /// when the group may be evaluated row by row (<see cref="KeptLogs.Far"/>).</summary>

@@ -61,6 +61,6 @@ internal static class BlockOrderChecks
             tb[at] = t[k];
         }
 
-        return (eb, RunPositions.From(tb));
+        return (eb, RunPositions.Wrap(tb));
     }
 }

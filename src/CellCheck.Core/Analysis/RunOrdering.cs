@@ -55,7 +55,7 @@ internal static class RunOrdering
             }
         }
 
-        return new RunOrdered(gathered, t is null ? order : RunPositions.From(t), rows, missing, ties, use, spare, null);
+        return new RunOrdered(gathered, t is null ? order : RunPositions.Wrap(t), rows, missing, ties, use, spare, null);
     }
 
     /// <summary>True when the run positions are all present and never decrease; <paramref name="ties"/> counts the

@@ -115,6 +115,9 @@ public sealed class RunPositions
         return new RunPositions(null, offsets, 0, first, values.Length);
     }
 
+    /// <summary>The given positions held as they are, for a short-lived copy (no pass to find a compact form).</summary>
+    internal static RunPositions Wrap(double[] values) => new(values, null, 0, 0, values.Length);
+
     /// <summary>True when a run of positions may be counted from <paramref name="first"/>: a whole number (not −0)
     /// small enough that every sum of it and a 32-bit whole number is exact, so that a position reads back the same
     /// double however it is reached.</summary>

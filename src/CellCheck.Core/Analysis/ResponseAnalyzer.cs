@@ -58,16 +58,20 @@ public static class ResponseAnalyzer
         Action resolutionStep = () => resolution = RecordingStep.Summarize(partition.Values, column.Decimals, residuals.ResidualSd);
         if (rows > WorkingMemory.ReleaseRows)
         {
-            // on large data each group's working copies are tens to hundreds of megabytes: the largest (the order checks,
-            // then the transformation fits) run beside the smallest, so that no two large copies are held at once
+            // on large data each group's working copies are tens to hundreds of megabytes: the largest (the order checks)
+            // runs beside the smallest, the pooled tests beside the spread and model checks, the transformation fits
+            // (two λ at a time themselves) alone, so that no two large copies are held at once
             Parallel.Invoke(orderStep, () =>
             {
                 cellStep();
-                modelStep();
                 resolutionStep();
                 primaryStep();
             });
-            Parallel.Invoke(spreadStep, pooledStep);
+            Parallel.Invoke(pooledStep, () =>
+            {
+                spreadStep();
+                modelStep();
+            });
             remedyStep();
         }
         else

@@ -59,20 +59,16 @@ public static class ResponseAnalyzer
         if (rows > WorkingMemory.ReleaseRows)
         {
             // on large data each group's working copies are tens to hundreds of megabytes: the largest (the order checks)
-            // runs beside the smallest, the pooled tests beside the spread and model checks, the transformation fits
-            // (two λ at a time themselves) alone, so that no two large copies are held at once
+            // runs beside the smallest, the pooled tests beside the model checks, the transformation fits beside the
+            // spread tests, so that no two large copies are held at once
             Parallel.Invoke(orderStep, () =>
             {
                 cellStep();
                 resolutionStep();
                 primaryStep();
             });
-            Parallel.Invoke(pooledStep, () =>
-            {
-                spreadStep();
-                modelStep();
-            });
-            remedyStep();
+            Parallel.Invoke(pooledStep, modelStep);
+            Parallel.Invoke(remedyStep, spreadStep);
         }
         else
         {

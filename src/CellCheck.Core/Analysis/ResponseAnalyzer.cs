@@ -79,6 +79,8 @@ public static class ResponseAnalyzer
             }, pooledStep, orderStep, modelStep, resolutionStep);
         }
 
+        // the checks' working copies are garbage now: hand their memory back before the reports are written beside it
+        WorkingMemory.Compact(rows);
         var assumptions = PrimaryDecisions.Decide(partition, residuals, pooled, spread, order, calibration, options.Alpha, resolution, options.Simulation, primary);
         var verdict = VerdictWriter.Write(new VerdictInputs(census, cells, pooled, spread, partition.Factors, assumptions, calibration.Operating, model) { Resolution = resolution }, options);
         return new ResponseReport(column.Name, column.Unit, partition.Values.Count, data.Excluded[response], census, cells, pooled, spread, verdict)

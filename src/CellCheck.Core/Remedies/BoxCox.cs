@@ -128,9 +128,9 @@ public static class BoxCox
         var logs = new double[y.Length];
         for (var i = 0; i < y.Length; i++)
         {
-            if (!(y[i] > 0) || !double.IsFinite(y[i]))
+            if (!PlainLogs.Usable(y[i]))
             {
-                throw new ArgumentException($"Box-Cox needs positive finite values; value {i} is {y[i]}", nameof(y));
+                throw PlainLogs.Refusal(i, y[i]);
             }
 
             logs[i] = Math.Log(y[i]);

@@ -10,7 +10,7 @@ internal sealed class PlainLogs(double[] y) : ILogSource
         for (var k = 0; k < target.Length; k++)
         {
             var v = y[from + k];
-            if (!(v > 0) || !double.IsFinite(v))
+            if (!Usable(v))
             {
                 return false;
             }
@@ -23,7 +23,14 @@ internal sealed class PlainLogs(double[] y) : ILogSource
 
     public ArgumentException Failure()
     {
-        var i = Array.FindIndex(y, v => !(v > 0) || !double.IsFinite(v));
-        return new ArgumentException($"Box-Cox needs positive finite values; value {i} is {y[i]}", nameof(y));
+        var i = Array.FindIndex(y, v => !Usable(v));
+        return Refusal(i, y[i]);
     }
+
+    /// <summary>True when log y may be taken: y positive and finite.</summary>
+    internal static bool Usable(double y) => y > 0 && double.IsFinite(y);
+
+    /// <summary>The error naming value <paramref name="index"/> (<paramref name="y"/>), the first that is not <see cref="Usable"/>.</summary>
+    internal static ArgumentException Refusal(int index, double y) =>
+        new($"Box-Cox needs positive finite values; value {index} is {y}", nameof(y));
 }

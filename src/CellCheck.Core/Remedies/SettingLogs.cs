@@ -33,7 +33,7 @@ internal sealed class SettingLogs<TValues>(TValues y, SettingOrder settings) : I
                 for (var p = Math.Max(from, cellFrom); p < Math.Min(end, cellStarts[c + 1]); p++)
                 {
                     var v = y[order[p - cellFrom]];
-                    if (!(v > 0) || !double.IsFinite(v))
+                    if (!PlainLogs.Usable(v))
                     {
                         return false;
                     }
@@ -54,7 +54,7 @@ internal sealed class SettingLogs<TValues>(TValues y, SettingOrder settings) : I
     public ArgumentException Failure()
     {
         var order = settings.Permutation();
-        var k = Array.FindIndex(order, i => !(y[i] > 0) || !double.IsFinite(y[i]));
-        return new ArgumentException($"Box-Cox needs positive finite values; value {order[k]} is {y[order[k]]}", nameof(y));
+        var k = Array.FindIndex(order, i => !PlainLogs.Usable(y[i]));
+        return PlainLogs.Refusal(order[k], y[order[k]]);
     }
 }

@@ -1,11 +1,12 @@
 using CellCheck.Core.Data;
+using CellCheck.Core.Statistics;
 
 namespace CellCheck.Core.Cells;
 
 /// <summary>
 /// Gives every usable row a dense cell index, ordered lexicographically by the factors' level indices.
 /// Small factorial spaces use a direct table on the mixed-radix index; large ones a hash map, then a sort of the
-/// observed combinations.
+/// observed combinations. On long data the table's passes take ranges of rows side by side (each row on its own).
 /// </summary>
 internal static class CellIndexer
 {
@@ -85,15 +86,19 @@ internal static class CellIndexer
     private static long[] AssignByTable(LevelCodes[] codes, long[] radix, double[] values, int[] cellOfRow, int space)
     {
         var table = new int[space]; // 1 where a key is seen, then the key's cell index
-        for (var row = 0; row < values.Length; row++)
+        // each row on its own, ranges of rows side by side (a key seen in two ranges is marked 1 by both)
+        GroupChunks.ForEachRange(values.Length, (from, to) =>
         {
-            var key = (int)Key(codes, radix, values, row);
-            cellOfRow[row] = key;
-            if (key >= 0)
+            for (var row = from; row < to; row++)
             {
-                table[key] = 1;
+                var key = (int)Key(codes, radix, values, row);
+                cellOfRow[row] = key;
+                if (key >= 0)
+                {
+                    table[key] = 1;
+                }
             }
-        }
+        });
 
         var distinct = new List<long>();
         for (var k = 0; k < space; k++)
@@ -105,11 +110,14 @@ internal static class CellIndexer
             }
         }
 
-        for (var row = 0; row < cellOfRow.Length; row++)
+        GroupChunks.ForEachRange(cellOfRow.Length, (from, to) =>
         {
-            var key = cellOfRow[row];
-            cellOfRow[row] = key < 0 ? -1 : table[key];
-        }
+            for (var row = from; row < to; row++)
+            {
+                var key = cellOfRow[row];
+                cellOfRow[row] = key < 0 ? -1 : table[key];
+            }
+        });
 
         return [.. distinct];
     }

@@ -128,7 +128,7 @@ public sealed class CellPartition
 
         values = masked ?? values;
 
-        var cellOfRow = new int[values.Length];
+        var cellOfRow = GC.AllocateUninitializedArray<int>(values.Length); // every row written by the indexer
         var cellLevels = CellIndexer.Assign(factors, values, cellOfRow, out var cellCount);
 
         var blockSource = new LevelCodes[blocks.Count];

@@ -47,8 +47,9 @@ internal static class CellSort
             starts[c + 1] = at;
         }
 
-        var rowOrder = new int[starts[^1]];
-        var grouped = new double[starts[^1]];
+        // every position is written once by the scatter below (side by side), so neither array is cleared first
+        var rowOrder = GC.AllocateUninitializedArray<int>(starts[^1]);
+        var grouped = GC.AllocateUninitializedArray<double>(starts[^1]);
         var blockCodes = new LevelCodes[blockSource.Length];
         for (var b = 0; b < blockSource.Length; b++)
         {

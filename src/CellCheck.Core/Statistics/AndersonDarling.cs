@@ -116,12 +116,24 @@ public static class AndersonDarling
         // rounded at the data's magnitude. Both keep the order and leave A² unchanged.
         var scale = SampleGuard.ScaleFor(sorted);
         var origin = sorted[sorted.Length / 2] * scale;
-        for (var i = 0; i < sorted.Length; i++)
+        if (array is not null)
         {
-            sorted[i] = (sorted[i] * scale) - origin;
+            // each value on its own: ranges of a long sample side by side
+            GroupChunks.ForEachRange(sorted.Length, (from, to) => Centre(array.AsSpan(from, to - from), scale, origin));
+            return Outcome(AndersonDarlingSum.Statistic(array, sorted.Length), sorted.Length);
         }
 
-        var a2 = array is not null ? AndersonDarlingSum.Statistic(array, sorted.Length) : AndersonDarlingSum.Statistic(sorted);
-        return new TestOutcome(a2, PValue(ModifiedStatistic(a2, sorted.Length)));
+        Centre(sorted, scale, origin);
+        return Outcome(AndersonDarlingSum.Statistic(sorted), sorted.Length);
+    }
+
+    private static TestOutcome Outcome(double a2, int n) => new(a2, PValue(ModifiedStatistic(a2, n)));
+
+    private static void Centre(Span<double> values, double scale, double origin)
+    {
+        for (var i = 0; i < values.Length; i++)
+        {
+            values[i] = (values[i] * scale) - origin;
+        }
     }
 }

@@ -41,14 +41,16 @@ internal static class OrderChecks
         }
 
         var checks = new List<CheckResult>();
-        // the three parts read the same run-ordered residuals and write only their own results
+        // the four parts read the same run-ordered residuals and write only their own results
         DurbinWatsonResult? dw = null;
         List<CheckResult> signAndTrend = null!;
         List<BlockOrderResult> byBlock = null!;
+        double? lag1 = null;
         Parallel.Invoke(
             () => dw = DurbinWatsonOf(data, partition, residuals, ordered),
             () => signAndTrend = SignAndTrend(e, t, alpha),
-            () => byBlock = data.Blocks.Count == 0 ? [] : BlockOrderChecks.Run(data, rows, e, t, alpha));
+            () => byBlock = data.Blocks.Count == 0 ? [] : BlockOrderChecks.Run(data, rows, e, t, alpha),
+            () => lag1 = e.Length > 1 ? LagCorrelation.Lag1(e) : null);
         if (dw is null)
         {
             checks.Add(CheckResults.NotTestable(CheckNames.DurbinWatson, NotTestableReason.TooManyValues));
@@ -62,7 +64,7 @@ internal static class OrderChecks
         }
 
         checks.AddRange(signAndTrend);
-        return new OrderResult(data.RunOrderColumn, e.Length, checks, e.Length > 1 ? LagCorrelation.Lag1(e) : null,
+        return new OrderResult(data.RunOrderColumn, e.Length, checks, lag1,
             dw?.ExpectedD, dw?.Method, byBlock, notes);
     }
 

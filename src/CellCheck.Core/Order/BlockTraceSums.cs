@@ -1,4 +1,3 @@
-using System.Runtime.CompilerServices;
 using CellCheck.Core.Data;
 
 namespace CellCheck.Core.Order;
@@ -23,54 +22,24 @@ internal static class BlockTraceSums
     public static (double[,] G, double[,] K) Compute(int[] cell, int cells, LevelCodes[] dummy, int p, double[] mean, double[] size)
     {
         var n = cell.Length;
-        var weightG = new double[cells]; // Σ_{t∈c} d_t
-        var weightW = new double[cells]; // Σ_{t∈c} (d_t² + d_t)
-        var crossG = new double[p * cells]; // weights of E_a m_cᵀ, by block column a and cell c
-        var crossW = new double[p * cells];
-        var indicator = new double[cells * p]; // Σ_{t∈c} (d_t E_t − E_{t−1} − E_{t+1})
-        var eeG = new double[p, p];
-        var eeW = new double[p, p];
         // per cell: Σ m of the cell one step earlier, two steps earlier, one step later (a pass of its own, side by side)
         var neighbours = Task.Run(() => NeighbourMeans.Sum(cell, cells, mean, p));
-        // the contrast columns of positions t − 2 .. t + 1, decoded once a position into a ring of four slots
-        var m = dummy.Length;
-        Span<int> ring = stackalloc int[4 * m];
-        TraceUpdates.Decode(dummy, 0, ring[..m]);
-        for (var t = 0; t < n; t++)
+        // the whole-number sums in run order, a long sequence in two ranges side by side (exact, so the same doubles)
+        var parts = n < NeighbourMeans.SideBySide ? 1 : 2;
+        var ranges = new TraceAccumulator[parts];
+        Parallel.For(0, parts, part =>
         {
-            var c = cell[t];
-            var d = Degree(t, n);
-            var z = ring.Slice((t & 3) * m, m);
-            if (t < n - 1)
-            {
-                TraceUpdates.Decode(dummy, t + 1, ring.Slice(((t + 1) & 3) * m, m));
-            }
-
-            weightG[c] += d;
-            weightW[c] += (d * d) + d;
-            TraceUpdates.Pair(z, z, c, c, d, eeG, crossG, cells);
-            TraceUpdates.Pair(z, z, c, c, (d * d) + d, eeW, crossW, cells);
-            TraceUpdates.Indicators(z, indicator, c * p, d);
-            if (t > 0)
-            {
-                var back = ring.Slice(((t - 1) & 3) * m, m);
-                var lag = -(d + Degree(t - 1, n));
-                TraceUpdates.Pair(z, back, c, cell[t - 1], -1, eeG, crossG, cells, symmetric: true);
-                TraceUpdates.Pair(z, back, c, cell[t - 1], lag, eeW, crossW, cells, symmetric: true);
-                TraceUpdates.Indicators(back, indicator, c * p, -1);
-            }
-
-            if (t > 1)
-            {
-                TraceUpdates.Pair(z, ring.Slice(((t - 2) & 3) * m, m), c, cell[t - 2], 1, eeW, crossW, cells, symmetric: true);
-            }
-
-            if (t < n - 1)
-            {
-                TraceUpdates.Indicators(ring.Slice(((t + 1) & 3) * m, m), indicator, c * p, -1);
-            }
+            ranges[part] = new TraceAccumulator(cells, p);
+            ranges[part].Add(cell, dummy, (int)((long)n * part / parts), (int)((long)n * (part + 1) / parts));
+        });
+        var sums = ranges[0];
+        for (var part = 1; part < parts; part++)
+        {
+            sums.Merge(ranges[part]);
         }
 
+        var (weightG, weightW, crossG, crossW, indicator) = (sums.WeightG, sums.WeightW, sums.CrossG, sums.CrossW, sums.Indicator);
+        var (eeG, eeW) = (sums.EeG, sums.EeW);
         var (back1, back2, ahead1) = neighbours.Result;
         // the mean-part weights of the lag-one pairs in WᵀW: −(d_t + d_{t−1}), which is −4 except next to the ends
         var laggedW = new double[cells * p];
@@ -81,7 +50,7 @@ internal static class BlockTraceSums
 
         for (var t = 1; t < n; t = t == 1 && n > 2 ? n - 1 : n)
         {
-            var extra = 4 - (Degree(t, n) + Degree(t - 1, n));
+            var extra = 4 - (TraceAccumulator.Degree(t, n) + TraceAccumulator.Degree(t - 1, n));
             for (var a = 0; a < p; a++)
             {
                 laggedW[(cell[t] * p) + a] += extra * mean[(cell[t - 1] * p) + a];
@@ -116,9 +85,6 @@ internal static class BlockTraceSums
 
         return (g, ww);
     }
-
-    [MethodImpl(MethodImplOptions.AggressiveInlining)] // called several times per position
-    private static int Degree(int t, int n) => (t > 0 ? 1 : 0) + (t < n - 1 ? 1 : 0);
 
     /// <summary>EE − (X + Xᵀ) + Σ_c weight_c m_c m_cᵀ + sign·(Y + Yᵀ), X[a, b] = Σ_c cross[a, c]·m_c[b], Y = Σ_c m_c lagged_cᵀ.</summary>
     private static double[,] Assemble(double[,] ee, double[] cross, double[] weight, double[] lagged, double sign, double[] mean, int cells, int p)

@@ -18,19 +18,65 @@ internal static class FlagSort
         BucketSort.Sort(keys, starts, 0, starts.Length - 1, new ulong[BucketSort.Longest(starts)]);
     }
 
-    /// <summary>Sorts the keys <paramref name="keys"/> gives (buckets side by side).</summary>
-    public static void Sort(KeySpan keys) => BucketSort.Run(keys, Distribute(keys()));
+    /// <summary>Sorts the keys <paramref name="keys"/> gives (buckets side by side; the keys' range and the bucket
+    /// counts taken over ranges of keys side by side, only the moves along the cycles on one thread).</summary>
+    public static void Sort(KeySpan keys)
+    {
+        var all = keys();
+        var ranges = (all.Length + GroupChunks.ChunkRows - 1) / GroupChunks.ChunkRows;
+        var spans = new (ulong Min, ulong Max)[ranges];
+        GroupChunks.ForEachRange(all.Length, (from, to) => spans[from / GroupChunks.ChunkRows] = KeyBuckets.Range(keys()[from..to]));
+        var (min, max) = spans[0];
+        foreach (var (low, high) in spans)
+        {
+            (min, max) = (Math.Min(min, low), Math.Max(max, high));
+        }
+
+        var buckets = KeyBuckets.For(min, max);
+        var counts = new int[ranges][];
+        GroupChunks.ForEachRange(all.Length, (from, to) => counts[from / GroupChunks.ChunkRows] = Count(keys()[from..to], buckets));
+        var starts = new int[buckets.Count + 1];
+        foreach (var part in counts)
+        {
+            for (var b = 0; b < buckets.Count; b++)
+            {
+                starts[b + 1] += part[b];
+            }
+        }
+
+        BucketSort.Run(keys, Distribute(keys(), buckets, starts));
+    }
 
     /// <summary>Moves every key into its bucket; returns where each bucket starts, and the end.</summary>
     private static int[] Distribute(Span<ulong> keys)
     {
         var buckets = KeyBuckets.For(keys);
         var starts = new int[buckets.Count + 1];
-        foreach (var key in keys)
+        var counts = Count(keys, buckets);
+        for (var b = 0; b < buckets.Count; b++)
         {
-            starts[buckets.Of(key) + 1]++;
+            starts[b + 1] = counts[b];
         }
 
+        return Distribute(keys, buckets, starts);
+    }
+
+    /// <summary>The number of keys in each bucket.</summary>
+    private static int[] Count(ReadOnlySpan<ulong> keys, KeyBuckets buckets)
+    {
+        var counts = new int[buckets.Count];
+        foreach (var key in keys)
+        {
+            counts[buckets.Of(key)]++;
+        }
+
+        return counts;
+    }
+
+    /// <summary>Moves every key into its bucket, given each bucket's count at <paramref name="starts"/>[b + 1]; returns
+    /// where each bucket starts, and the end.</summary>
+    private static int[] Distribute(Span<ulong> keys, KeyBuckets buckets, int[] starts)
+    {
         for (var b = 0; b < buckets.Count; b++)
         {
             starts[b + 1] += starts[b];

@@ -35,12 +35,25 @@ internal readonly struct KeyBuckets
     /// <summary>The buckets for <paramref name="keys"/> (at least one key).</summary>
     public static KeyBuckets For(ReadOnlySpan<ulong> keys)
     {
+        var (min, max) = Range(keys);
+        return For(min, max);
+    }
+
+    /// <summary>The smallest and largest of <paramref name="keys"/> (at least one).</summary>
+    public static (ulong Min, ulong Max) Range(ReadOnlySpan<ulong> keys)
+    {
         var (min, max) = (keys[0], keys[0]);
         foreach (var key in keys)
         {
             (min, max) = (Math.Min(min, key), Math.Max(max, key));
         }
 
+        return (min, max);
+    }
+
+    /// <summary>The buckets for keys from <paramref name="min"/> to <paramref name="max"/>.</summary>
+    public static KeyBuckets For(ulong min, ulong max)
+    {
         var largest = Math.Max(Math.Abs(RadixSort.ValueOf(min)), Math.Abs(RadixSort.ValueOf(max)));
         var low = Math.ScaleB(largest, -Octaves);
         var negativeTop = Math.Min(RadixSort.KeyOf(-low), max);

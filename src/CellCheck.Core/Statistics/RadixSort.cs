@@ -63,24 +63,35 @@ internal static class RadixSort
     /// by <see cref="FlagSort"/>, which needs no copy; <paramref name="shared"/> gives the same keys to its workers.</summary>
     private static void SortLong(Span<double> values, KeySpan? shared)
     {
-        var keys = MemoryMarshal.Cast<double, ulong>(values);
-        for (var i = 0; i < values.Length; i++)
-        {
-            keys[i] = Key(values[i]);
-        }
-
         if (shared is null)
         {
+            var keys = MemoryMarshal.Cast<double, ulong>(values);
+            ToKeys(keys);
             FlagSort.Sort(keys);
-        }
-        else
-        {
-            FlagSort.Sort(shared);
+            ToValues(keys);
+            return;
         }
 
-        for (var i = 0; i < values.Length; i++)
+        // each value on its own: ranges side by side
+        GroupChunks.ForEachRange(values.Length, (from, to) => ToKeys(shared()[from..to]));
+        FlagSort.Sort(shared);
+        GroupChunks.ForEachRange(values.Length, (from, to) => ToValues(shared()[from..to]));
+    }
+
+    /// <summary>Writes each value's key over it (the value's bits read as a key).</summary>
+    private static void ToKeys(Span<ulong> bits)
+    {
+        for (var i = 0; i < bits.Length; i++)
         {
-            values[i] = Value(keys[i]);
+            bits[i] = Key(BitConverter.UInt64BitsToDouble(bits[i]));
+        }
+    }
+
+    private static void ToValues(Span<ulong> keys)
+    {
+        for (var i = 0; i < keys.Length; i++)
+        {
+            keys[i] = BitConverter.DoubleToUInt64Bits(Value(keys[i]));
         }
     }
 

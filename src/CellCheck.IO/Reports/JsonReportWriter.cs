@@ -72,6 +72,19 @@ public static class JsonReportWriter
         w.WriteEndObject();
     }
 
+    /// <summary>Hands what the writer holds to the stream once it passes 64 KB (called between the entries of long
+    /// lists): left to itself the writer holds the whole report until the end, a buffer doubled and copied up to the
+    /// report's size (10 MB for ten thousand cells). The bytes written are the same.</summary>
+    internal static void FlushLarge(Utf8JsonWriter w)
+    {
+        if (w.BytesPending >= PendingLimit)
+        {
+            w.Flush();
+        }
+    }
+
+    private const int PendingLimit = 1 << 16;
+
     internal static void Number(Utf8JsonWriter w, string name, double? value)
     {
         if (value is { } v && double.IsFinite(v))

@@ -29,6 +29,7 @@ internal static class ResponseJson
             w.WriteString("code", x.Code);
             w.WriteString("reason", x.Reason);
             w.WriteEndObject();
+            JsonReportWriter.FlushLarge(w);
         }
 
         w.WriteEndArray();
@@ -48,6 +49,7 @@ internal static class ResponseJson
             w.WriteString("status", StatusWords.Of(cell.Status));
             Checks(w, cell.Checks);
             w.WriteEndObject();
+            JsonReportWriter.FlushLarge(w);
         }
 
         w.WriteEndArray();
@@ -82,6 +84,7 @@ internal static class ResponseJson
             w.WriteStartObject();
             LevelPairs(w, levels, factors);
             w.WriteEndObject();
+            JsonReportWriter.FlushLarge(w);
         }
 
         w.WriteEndArray();

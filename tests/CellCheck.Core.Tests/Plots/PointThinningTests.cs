@@ -41,6 +41,18 @@ public sealed class PointThinningTests
         Assert.All(Enumerable.Range(0, ys.Length).Where(i => Math.Abs(ys[i]) >= threshold), i => Assert.Contains(i, kept));
     }
 
+    [Fact]
+    public void Of_points_equally_far_out_the_earliest_are_kept_first()
+    {
+        // 1 500 points at |y| = 1 (both signs), the rest near zero: the 1 000 extremes are the first 1 000 of them
+        var ys = Enumerable.Range(0, 60_000).Select(i => i % 40 == 7 ? (i % 80 == 7 ? 1.0 : -1.0) : 1e-3 * (i % 13)).ToArray();
+        var far = Enumerable.Range(0, ys.Length).Where(i => Math.Abs(ys[i]) == 1.0).ToArray();
+        Assert.Equal(1_500, far.Length);
+        var kept = PointThinning.Positions(ys, new HashSet<int>()).ToHashSet();
+        Assert.All(far.Take(PointThinning.Extremes), i => Assert.Contains(i, kept));
+        Assert.Equal(kept.Count, PointThinning.Positions(ys, new HashSet<int>()).Length); // ascending, no repeats
+    }
+
     /// <summary>
     /// The exact order-statistic band against the simulated band at a size where both can be computed (n = 2000).
     /// Tolerance 0.08 in standard units: the simulated band has Monte Carlo error of a few hundredths at 199 draws,

@@ -44,7 +44,7 @@ public static class CellGridPlot
             ? AxisScale.Linear("normal quantile", -LastBlom(largest), LastBlom(largest))
             : new Axis(string.Empty, -1.3, 1.3, []);
 
-        var envelopes = new Dictionary<int, QqEnvelope>();
+        var envelopes = Envelopes(layout.Places.Where(c => c >= 0).Select(c => members[c].Count(i => double.IsFinite(rows.Residuals[i]))), options);
         var panels = new List<Panel>();
         foreach (var c in layout.Places)
         {
@@ -96,6 +96,16 @@ public static class CellGridPlot
         return "Envelope: " + NumberText.Count(options.Draws) + " normal samples of the same size (seed " + NumberText.Count(options.Seed)
             + "), each standardised by its own mean and SD; at each position the band runs from the 5th smallest to the 5th largest, "
             + "scaled by the plotted values' mean and SD. It is pointwise: a point outside it is unusual at that position alone.";
+    }
+
+    /// <summary>The simulated envelope of every panel size <paramref name="sizes"/> that gets one (a QQ panel drawing
+    /// every point), side by side: each depends on its size and the seed alone, so each is what one panel would make.</summary>
+    private static Dictionary<int, QqEnvelope> Envelopes(IEnumerable<int> sizes, PlotOptions options)
+    {
+        var simulated = sizes.Where(n => n >= options.MinQq && n <= PointThinning.MaxPoints).Distinct().ToArray();
+        var envelopes = new QqEnvelope[simulated.Length];
+        Parallel.For(0, simulated.Length, i => envelopes[i] = QqEnvelopes.Simulate(simulated[i], options.Seed, options.Draws));
+        return simulated.Zip(envelopes).ToDictionary(pair => pair.First, pair => pair.Second);
     }
 
     /// <summary>The largest Blom score of n, as NormalScores.Blom(n) gives it (by symmetry, minus the smallest).</summary>

@@ -96,12 +96,48 @@ public static class QqEnvelopes
         var upper = new double[n];
         for (var i = 0; i < n; i++)
         {
-            Array.Sort(byPosition[i]);
-            lower[i] = byPosition[i][k - 1];
-            upper[i] = byPosition[i][draws - k];
+            (lower[i], upper[i]) = Tails(byPosition[i], k);
         }
 
         return new QqEnvelope(lower, upper, (draws + 1 - (2.0 * k)) / (draws + 1));
+    }
+
+    /// <summary>The k-th smallest and the k-th largest of <paramref name="values"/> (k ≤ 16, at most half of them): the
+    /// values a sort would put at k − 1 and at length − k, from one pass that keeps the k smallest and the k largest met.</summary>
+    internal static (double Low, double High) Tails(ReadOnlySpan<double> values, int k)
+    {
+        ArgumentOutOfRangeException.ThrowIfGreaterThan(k, 16);
+        ArgumentOutOfRangeException.ThrowIfGreaterThan(2 * k, values.Length);
+        Span<double> low = stackalloc double[k]; // ascending: the k smallest so far
+        Span<double> high = stackalloc double[k]; // descending: the k largest so far
+        for (var i = 0; i < values.Length; i++)
+        {
+            var v = values[i];
+            var kept = Math.Min(i, k);
+            if (kept < k || v < low[k - 1])
+            {
+                var at = Math.Min(kept, k - 1);
+                for (; at > 0 && low[at - 1] > v; at--)
+                {
+                    low[at] = low[at - 1];
+                }
+
+                low[at] = v;
+            }
+
+            if (kept < k || v > high[k - 1])
+            {
+                var at = Math.Min(kept, k - 1);
+                for (; at > 0 && high[at - 1] < v; at--)
+                {
+                    high[at] = high[at - 1];
+                }
+
+                high[at] = v;
+            }
+        }
+
+        return (low[k - 1], high[k - 1]);
     }
 
     /// <summary>Mean and standard deviation (n − 1 divisor) of the values, by two passes.</summary>

@@ -23,22 +23,34 @@ public static class DiagnosticsCsvWriter
             {
                 using var row = writer.NewRow();
                 row["response"].Set(r.Response);
-                row["line"].Set(d.Lines[i].ToString(CultureInfo.InvariantCulture));
+                row["line"].Format(d.Lines[i]);
                 var levels = r.Cells[d.Cells[i]].Levels;
                 for (var f = 0; f < report.Design.Factors.Count; f++)
                 {
                     row[report.Design.Factors[f]].Set(levels[f]);
                 }
 
-                row["fitted"].Set(Number(d.Fitted[i]));
-                row["residual"].Set(Number(d.Residuals[i]));
-                row["studentized"].Set(Number(d.Studentized[i]));
-                row["studentized_external"].Set(Number(d.StudentizedExternal[i]));
-                row["leverage"].Set(Number(d.Leverage[i]));
-                row["cooks_distance"].Set(Number(d.CooksDistance[i]));
+                Number(row["fitted"], d.Fitted[i]);
+                Number(row["residual"], d.Residuals[i]);
+                Number(row["studentized"], d.Studentized[i]);
+                Number(row["studentized_external"], d.StudentizedExternal[i]);
+                Number(row["leverage"], d.Leverage[i]);
+                Number(row["cooks_distance"], d.CooksDistance[i]);
             }
         }
     }
 
-    private static string Number(double x) => double.IsFinite(x) ? x.ToString("R", CultureInfo.InvariantCulture) : string.Empty;
+    /// <summary>The shortest text that reads back as the same double (as "R" writes it), formatted in place without a
+    /// string per value; empty when not finite.</summary>
+    private static void Number(SepWriter.Col col, double x)
+    {
+        if (double.IsFinite(x))
+        {
+            col.Format(x);
+        }
+        else
+        {
+            col.Set(ReadOnlySpan<char>.Empty);
+        }
+    }
 }

@@ -1,6 +1,7 @@
 using CellCheck.Core.Cells;
 using CellCheck.Core.Data;
 using CellCheck.Core.Models;
+using CellCheck.Core.Statistics;
 
 namespace CellCheck.Core.Remedies;
 
@@ -36,40 +37,42 @@ internal sealed class SettingRss : IResidualSumOfSquares
     public static SettingRss? Build(CellPartition partition, IReadOnlyList<FactorColumn> blocks)
     {
         var (settings, count) = SettingGroups.Of(partition, blocks);
+        var cellStarts = partition.Values.Starts;
         var starts = new int[count + 1];
-        foreach (var g in settings)
+        var settingCells = new int[partition.CellCount + 1];
+        var weights = new double[count];
+        var codes = blocks.Select(_ => new int[count]).ToArray();
+        // settings are numbered cell by cell, in order of first appearance: each cell's settings are contiguous and
+        // belong to it alone, so ranges of cells count their settings' rows and note each one's block codes (from its
+        // first row) side by side, each writing only its own settings
+        GroupChunks.ForEach(cellStarts, (from, to) =>
         {
-            starts[g + 1]++;
+            for (var c = from; c < to; c++)
+            {
+                for (var i = cellStarts[c]; i < cellStarts[c + 1]; i++)
+                {
+                    var g = settings[i];
+                    if (starts[g + 1]++ == 0)
+                    {
+                        var row = partition.RowOrder[i];
+                        for (var j = 0; j < blocks.Count; j++)
+                        {
+                            codes[j][g] = blocks[j].Codes[row];
+                        }
+
+                        settingCells[c + 1] = g + 1; // the cell's settings end after its last new one
+                    }
+                }
+            }
+        });
+        for (var c = 0; c < partition.CellCount; c++)
+        {
+            settingCells[c + 1] = Math.Max(settingCells[c + 1], settingCells[c]); // an empty cell has none
         }
 
         for (var g = 0; g < count; g++)
         {
             starts[g + 1] += starts[g];
-        }
-
-        // settings are numbered cell by cell, in order of first appearance: each cell's settings are contiguous, and a
-        // setting's first position is met before those of every higher setting
-        var settingCells = new int[partition.CellCount + 1];
-        var weights = new double[count];
-        var codes = blocks.Select(_ => new int[count]).ToArray();
-        var fresh = 0;
-        for (var c = 0; c < partition.CellCount; c++)
-        {
-            for (var i = partition.Values.Starts[c]; i < partition.Values.Starts[c + 1]; i++)
-            {
-                if (settings[i] == fresh)
-                {
-                    var row = partition.RowOrder[i];
-                    for (var j = 0; j < blocks.Count; j++)
-                    {
-                        codes[j][fresh] = blocks[j].Codes[row];
-                    }
-
-                    fresh++;
-                }
-            }
-
-            settingCells[c + 1] = fresh;
         }
 
         for (var g = 0; g < count; g++)

@@ -1,5 +1,6 @@
 using CellCheck.Core.Cells;
 using CellCheck.Core.Data;
+using CellCheck.Core.Remedies;
 
 namespace CellCheck.Core.Tests.Cells;
 
@@ -52,5 +53,15 @@ public sealed class SettingGroupsTests
 
         Assert.Equal(next, count);
         Assert.Equal(expected, settings);
+
+        // the Box-Cox fits' organisation of the same settings (counted by ranges of cells side by side on long data)
+        var organised = SettingRss.Build(partition, blocks)!;
+        var sizes = new int[count];
+        foreach (var g in expected)
+        {
+            sizes[g]++;
+        }
+
+        Assert.Equal(sizes, Enumerable.Range(0, count).Select(g => organised.Starts[g + 1] - organised.Starts[g]));
     }
 }

@@ -1,4 +1,5 @@
 using CellCheck.Core.Data;
+using CellCheck.Core.Statistics;
 
 namespace CellCheck.Core.Order;
 
@@ -25,7 +26,7 @@ internal static class BlockTraceSums
         // per cell: Σ m of the cell one step earlier, two steps earlier, one step later (a pass of its own, side by side)
         var neighbours = Task.Run(() => NeighbourMeans.Sum(cell, cells, mean, p));
         // the whole-number sums in run order, a long sequence in two ranges side by side (exact, so the same doubles)
-        var parts = n < NeighbourMeans.SideBySide ? 1 : 2;
+        var parts = n <= GroupChunks.ChunkRows ? 1 : 2;
         var ranges = new TraceAccumulator[parts];
         Parallel.For(0, parts, part =>
         {

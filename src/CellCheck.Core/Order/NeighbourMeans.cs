@@ -1,3 +1,5 @@
+using CellCheck.Core.Statistics;
+
 namespace CellCheck.Core.Order;
 
 /// <summary>
@@ -6,18 +8,16 @@ namespace CellCheck.Core.Order;
 /// </summary>
 /// <remarks>
 /// The three sums of a cell are kept side by side (one record of 3p values a cell), so each position writes one
-/// record instead of three scattered rows, and the p-vector additions run in vector lanes (<see cref="VectorKernels.Add"/>); every element still takes
-/// its terms one by one in run order, so the sums are the same doubles as a scalar loop's. On a long sequence the cells
-/// are shared out in two ranges, each summed on a thread of its own over the whole sequence (a range's cells are
-/// written by that thread alone, each still in run order): the same doubles again, in about half the time.
+/// record instead of three scattered rows, and the p-vector additions run in vector lanes (<see cref="VectorKernels.Add"/>);
+/// every element still takes its terms one by one in run order, so the sums are the same doubles as a scalar loop's. On a
+/// sequence longer than one range of <see cref="GroupChunks.ChunkRows"/> the cells are shared out in two ranges, each
+/// summed on a thread of its own over the whole sequence (a range's cells are written by that thread alone, each still
+/// in run order): the same doubles again, in about half the time.
 /// </remarks>
 internal static class NeighbourMeans
 {
-    /// <summary>Sequences at least this long are summed in two ranges of cells side by side.</summary>
-    public const int SideBySide = 1 << 16;
-
     public static (double[] Back1, double[] Back2, double[] Ahead1) Sum(int[] cell, int cells, double[] mean, int p) =>
-        Sum(cell, cells, mean, p, cell.Length < SideBySide ? 1 : 2);
+        Sum(cell, cells, mean, p, cell.Length <= GroupChunks.ChunkRows ? 1 : 2);
 
     /// <summary>As <see cref="Sum(int[], int, double[], int)"/>, with the cells shared out in <paramref name="parts"/>
     /// ranges: the same doubles for any number of parts.</summary>

@@ -59,7 +59,6 @@ public static class PointThinning
         return keep.Order().ToArray();
     }
 
-    /// <summary>The note under a picture whose pooled panels were thinned.</summary>
     /// <summary>The positions of the <paramref name="count"/> largest |y| (of equal |y|, the earlier position), in one
     /// pass that keeps the largest so far in a heap whose root is the smallest of them: at ten million values a few
     /// thousand heap updates instead of sorting every value.</summary>
@@ -85,6 +84,7 @@ public static class PointThinning
         return [.. heap.UnorderedItems.Select(item => item.Element)];
     }
 
+    /// <summary>The note under a picture whose pooled panels were thinned.</summary>
     public static string Note(int total) =>
         "Pooled panels draw at most " + Analysis.NumberText.Count(MaxPoints) + " of the " + Analysis.NumberText.Count(total)
         + " points: the most extreme at both ends, every outlier and an even spread of the rest (every row is in diagnostics.csv).";

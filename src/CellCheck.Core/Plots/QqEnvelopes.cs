@@ -103,41 +103,40 @@ public static class QqEnvelopes
     }
 
     /// <summary>The k-th smallest and the k-th largest of <paramref name="values"/> (k ≤ 16, at most half of them): the
-    /// values a sort would put at k − 1 and at length − k, from one pass that keeps the k smallest and the k largest met.</summary>
+    /// values a sort would put at k − 1 and at length − k, from one pass that keeps the k smallest and the k largest met
+    /// (the largest as the smallest of the negated values; negation is exact).</summary>
     internal static (double Low, double High) Tails(ReadOnlySpan<double> values, int k)
     {
         ArgumentOutOfRangeException.ThrowIfGreaterThan(k, 16);
         ArgumentOutOfRangeException.ThrowIfGreaterThan(2 * k, values.Length);
         Span<double> low = stackalloc double[k]; // ascending: the k smallest so far
-        Span<double> high = stackalloc double[k]; // descending: the k largest so far
+        Span<double> negatedHigh = stackalloc double[k]; // ascending: the k largest so far, negated
         for (var i = 0; i < values.Length; i++)
         {
-            var v = values[i];
             var kept = Math.Min(i, k);
-            if (kept < k || v < low[k - 1])
-            {
-                var at = Math.Min(kept, k - 1);
-                for (; at > 0 && low[at - 1] > v; at--)
-                {
-                    low[at] = low[at - 1];
-                }
-
-                low[at] = v;
-            }
-
-            if (kept < k || v > high[k - 1])
-            {
-                var at = Math.Min(kept, k - 1);
-                for (; at > 0 && high[at - 1] < v; at--)
-                {
-                    high[at] = high[at - 1];
-                }
-
-                high[at] = v;
-            }
+            KeepSmallest(low, kept, values[i]);
+            KeepSmallest(negatedHigh, kept, -values[i]);
         }
 
-        return (low[k - 1], high[k - 1]);
+        return (low[k - 1], -negatedHigh[k - 1]);
+    }
+
+    /// <summary>Puts <paramref name="v"/> in its place among the <paramref name="kept"/> smallest values so far, held
+    /// ascending in <paramref name="smallest"/>, when it is one of them (the largest then falls out once it is full).</summary>
+    private static void KeepSmallest(Span<double> smallest, int kept, double v)
+    {
+        if (kept == smallest.Length && !(v < smallest[^1]))
+        {
+            return;
+        }
+
+        var at = Math.Min(kept, smallest.Length - 1);
+        for (; at > 0 && smallest[at - 1] > v; at--)
+        {
+            smallest[at] = smallest[at - 1];
+        }
+
+        smallest[at] = v;
     }
 
     /// <summary>Mean and standard deviation (n − 1 divisor) of the values, by two passes.</summary>

@@ -72,12 +72,8 @@ internal sealed class SettingRss : IResidualSumOfSquares
 
         for (var g = 0; g < count; g++)
         {
+            weights[g] = starts[g + 1]; // the setting's row count, before its start is summed in
             starts[g + 1] += starts[g];
-        }
-
-        for (var g = 0; g < count; g++)
-        {
-            weights[g] = starts[g + 1] - starts[g];
         }
 
         var between = CellBlockFit.Build(settingCells, codes.Select((c, j) => LevelCodes.From(c, blocks[j].Levels.Count)).ToArray(), weights);

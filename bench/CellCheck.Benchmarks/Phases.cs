@@ -74,7 +74,7 @@ internal static class Phases
     }
 
     /// <summary>The largest resident set since the last <see cref="ResetPeak"/> (VmHWM), or 0 where Linux's status file is missing.</summary>
-    private static long PhasePeak()
+    internal static long PhasePeak()
     {
         const string status = "/proc/self/status";
         var line = File.Exists(status) ? File.ReadLines(status).FirstOrDefault(l => l.StartsWith("VmHWM:", StringComparison.Ordinal)) : null;
@@ -83,7 +83,7 @@ internal static class Phases
 
     /// <summary>Resets the peak resident set to the present one (Linux: "5" into /proc/self/clear_refs), so the next
     /// phase's peak is its own.</summary>
-    private static void ResetPeak()
+    internal static void ResetPeak()
     {
         try
         {

@@ -12,6 +12,7 @@ namespace CellCheck.Benchmarks;
 /// <c>boxcox DESIGN [REPEATS]</c> times the parts of the Box-Cox fit of the blocked model;
 /// <c>dw ROWS CELLS</c> times the Durbin-Watson moment kernels;
 /// <c>spread ROWS CELLS</c> times the spread tests together and each alone;
+/// <c>outputs DESIGN</c> times each report output (the files <c>--out</c> writes) after one check;
 /// <c>kernels [BenchmarkDotNet arguments]</c> runs the kernel suite.
 /// </summary>
 internal static class Program
@@ -58,11 +59,14 @@ internal static class Program
             case "spread" when args.Length == 3:
                 SpreadTiming.Run(int.Parse(args[1], CultureInfo.InvariantCulture), int.Parse(args[2], CultureInfo.InvariantCulture));
                 return 0;
+            case "outputs" when args.Length == 2:
+                OutputTiming.Run(args[1]);
+                return 0;
             case "kernels":
                 BenchmarkSwitcher.FromAssembly(typeof(Program).Assembly).Run(args[1..]);
                 return 0;
             default:
-                Console.Error.WriteLine("usage: generate ROWS CELLS DIR | floor FILE | phases DESIGN | read DESIGN [WARMUP] | pooled ROWS | boxcox DESIGN [REPEATS] | dw ROWS CELLS | order ROWS | intern FILE | spread ROWS CELLS | kernels [BenchmarkDotNet arguments]");
+                Console.Error.WriteLine("usage: generate ROWS CELLS DIR | floor FILE | phases DESIGN | read DESIGN [WARMUP] | pooled ROWS | boxcox DESIGN [REPEATS] | dw ROWS CELLS | order ROWS | intern FILE | spread ROWS CELLS | outputs DESIGN | kernels [BenchmarkDotNet arguments]");
                 return 2;
         }
     }

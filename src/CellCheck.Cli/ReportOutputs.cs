@@ -1,3 +1,4 @@
+using CellCheck.Core.Plots;
 using CellCheck.IO;
 using CellCheck.IO.Html;
 using CellCheck.IO.Plots;
@@ -46,11 +47,14 @@ internal static class ReportOutputs
             pages.Add(Path.Combine(outDir, "report.html"));
         }
 
+        // the plot models are built once for the page and the picture files (at ten million rows each build sorts them)
+        var wantsPictures = outDir is not null && pictureDpi is not null;
+        var plots = pages.Count > 0 || wantsPictures ? ResponsePlots.Build(run.Report) : null;
         if (pages.Count > 0)
         {
             var context = new HtmlContext(FileDigest.Sha256(run.Design.DataPath), DateTimeOffset.UtcNow, ToolVersion.Text)
             {
-                Pictures = HtmlPictures.For(run.Report),
+                Pictures = HtmlPictures.For(run.Report, plots!),
             };
             var page = System.Text.Encoding.UTF8.GetBytes(HtmlReportWriter.Render(run.Report, context));
             foreach (var target in pages)
@@ -76,9 +80,9 @@ internal static class ReportOutputs
             output.WriteLine("Wrote " + target);
         }
 
-        if (outDir is not null && pictureDpi is { } dpi)
+        if (wantsPictures)
         {
-            var (pictures, problem) = PictureFiles.Write(run.Report, outDir, inputs, dpi);
+            var (pictures, problem) = PictureFiles.Write(plots!, outDir!, inputs, pictureDpi!.Value);
             foreach (var path in pictures)
             {
                 output.WriteLine("Wrote " + path);

@@ -148,15 +148,19 @@ public static class PooledPlot
             return Message(title, "no studentized residuals to plot", text);
         }
 
-        var xs = finite.Select(i => rows.Fitted[i]).ToArray();
-        var ys = finite.Select(i => rows.Studentized[i]).ToArray();
-        var x = AxisScale.Linear(PlotText.WithUnit("fitted " + report.Response, report.Unit), xs.Min(), xs.Max());
-        var y = AxisScale.Linear(Studentized, Math.Min(0, ys.Min()), Math.Max(0, ys.Max()), 6);
+        var fitted = rows.Fitted;
+        var ys = Gather(rows.Studentized, finite);
+        var (xLow, xHigh) = Range(fitted, finite);
+        var (yLow, yHigh) = Range(ys);
+        var x = AxisScale.Linear(PlotText.WithUnit("fitted " + report.Response, report.Unit), xLow, xHigh);
+        var y = AxisScale.Linear(Studentized, Math.Min(0, yLow), Math.Max(0, yHigh), 6);
         var drawn = Drawn(finite, ys, rows, outliers);
         if (drawn.Length < ys.Length)
         {
-            (xs, ys, finite) = (drawn.Select(k => xs[k]).ToArray(), drawn.Select(k => ys[k]).ToArray(), drawn.Select(k => finite[k]).ToArray());
+            (ys, finite) = (drawn.Select(k => ys[k]).ToArray(), drawn.Select(k => finite[k]).ToArray());
         }
+
+        var xs = Gather(fitted, finite);
 
         var series = new List<Series> { new StraightLine(SeriesRole.Guide, 0, 0) };
         series.AddRange(PointsWithHighlights(xs, finite, ys, rows, outliers));
@@ -173,9 +177,7 @@ public static class PooledPlot
                 + "(or run_order: file when the rows are in run order).", []);
         }
 
-        var placed = finite.Where(i => double.IsFinite(runOrder[i])).ToArray();
-        var positions = placed.Select(i => runOrder[i]).ToArray();
-        RadixOrder.Sort(positions, placed); // stable: shared run positions stay in row order
+        var placed = RunSequence.Placed(runOrder, finite); // stable: shared run positions stay in row order
         if (placed.Length < finite.Length)
         {
             notes.Add(NumberText.Count(finite.Length - placed.Length) + " row(s) without a run position are not in the run-order panel.");
@@ -189,12 +191,14 @@ public static class PooledPlot
         var first = runOrder[placed[0]];
         var span = runOrder[placed[^1]] - first;
         var (scale, label) = TimeScale(first, span, design.RunOrder);
-        var xs = placed.Select(i => (runOrder[i] - (scale.HasValue ? first : 0)) / (scale ?? 1)).ToArray();
-        var ys = placed.Select(i => rows.Studentized[i]).ToArray();
-        var x = AxisScale.Linear(label, xs[0], xs[^1]);
-        var y = AxisScale.Linear(Studentized, Math.Min(0, ys.Min()), Math.Max(0, ys.Max()), 6);
+        var (offset, unit) = (scale.HasValue ? first : 0, scale ?? 1);
+        double At(int row) => (runOrder[row] - offset) / unit;
+        var ys = Gather(rows.Studentized, placed);
+        var (yLow, yHigh) = Range(ys);
+        var x = AxisScale.Linear(label, At(placed[0]), At(placed[^1]));
+        var y = AxisScale.Linear(Studentized, Math.Min(0, yLow), Math.Max(0, yHigh), 6);
         var series = new List<Series> { new StraightLine(SeriesRole.Guide, 0, 0) };
-        if (Boundaries(design, rows, placed, xs) is { } rules)
+        if (Boundaries(design, rows, placed, At) is { } rules)
         {
             series.Add(rules);
         }
@@ -204,13 +208,16 @@ public static class PooledPlot
         }
 
         var drawn = Drawn(placed, ys, rows, outliers);
-        if (drawn.Length < ys.Length)
+        var thinned = drawn.Length < ys.Length;
+        if (thinned)
+        {
+            (ys, placed) = (drawn.Select(k => ys[k]).ToArray(), drawn.Select(k => placed[k]).ToArray());
+        }
+
+        var xs = Array.ConvertAll(placed, At);
+        if (!thinned)
         {
             // a path through a thinned sequence would draw steps that are not in the data: points only
-            (xs, ys, placed) = (drawn.Select(k => xs[k]).ToArray(), drawn.Select(k => ys[k]).ToArray(), drawn.Select(k => placed[k]).ToArray());
-        }
-        else
-        {
             series.Add(new LineSeries(SeriesRole.Path, xs, ys));
         }
 
@@ -235,7 +242,7 @@ public static class PooledPlot
     }
 
     /// <summary>Block boundaries in run order when each level of the first block factor is one unbroken stretch.</summary>
-    private static RuleSeries? Boundaries(DesignSummary design, RowDiagnostics rows, int[] placed, double[] xs)
+    private static RuleSeries? Boundaries(DesignSummary design, RowDiagnostics rows, int[] placed, Func<int, double> at)
     {
         if (rows.BlockCodes.Count == 0 || placed.Length == 0)
         {
@@ -261,8 +268,8 @@ public static class PooledPlot
         var names = rows.BlockLevels.Count > 0 ? rows.BlockLevels[0] : null;
         var block = design.Blocks.Count > 0 ? design.Blocks[0] : "block";
         var labels = levels.Select(l => block + " " + (names is not null && l >= 0 && l < names.Count ? names[l] : NumberText.Count(l + 1))).ToArray();
-        var at = stretches.Skip(1).Select(k => (xs[k - 1] + xs[k]) / 2).ToArray();
-        return new RuleSeries(SeriesRole.Boundary, at, labels);
+        var between = stretches.Skip(1).Select(k => (at(placed[k - 1]) + at(placed[k])) / 2).ToArray();
+        return new RuleSeries(SeriesRole.Boundary, between, labels);
     }
 
     private static Panel SpreadLevel(DesignSummary design, ResponseReport report, List<string> notes)
@@ -358,6 +365,35 @@ public static class PooledPlot
 
         var slope = sxy / sxx;
         return new LineCoefficients(my - (slope * mx), slope);
+    }
+
+    /// <summary>The values at the given rows, in their order.</summary>
+    private static double[] Gather(double[] values, int[] rows)
+    {
+        var result = new double[rows.Length];
+        for (var k = 0; k < rows.Length; k++)
+        {
+            result[k] = values[rows[k]];
+        }
+
+        return result;
+    }
+
+    /// <summary>The smallest and largest of the values at <paramref name="rows"/> (all when null), compared as
+    /// <see cref="Enumerable.Min(IEnumerable{double})"/> and Max compare finite values: the first of equal extremes kept.</summary>
+    private static (double Low, double High) Range(double[] values, int[]? rows = null)
+    {
+        var count = rows?.Length ?? values.Length;
+        var low = values[rows is null ? 0 : rows[0]];
+        var high = low;
+        for (var k = 1; k < count; k++)
+        {
+            var v = values[rows is null ? k : rows[k]];
+            low = v < low ? v : low;
+            high = v > high ? v : high;
+        }
+
+        return (low, high);
     }
 
     private static IEnumerable<Series> PointsWithHighlights(double[] xs, int[] rowIndex, double[] ys, RowDiagnostics rows, Dictionary<int, OutlierRow> outliers)

@@ -11,14 +11,27 @@ namespace CellCheck.IO.Html;
 /// </summary>
 public static class HtmlPictures
 {
-    public static IReadOnlyDictionary<string, IReadOnlyList<(string Title, string Svg)>> For(CheckReport report)
+    public static IReadOnlyDictionary<string, IReadOnlyList<(string Title, string Svg)>> For(CheckReport report) =>
+        For(report, ResponsePlots.Build(report ?? throw new ArgumentNullException(nameof(report))));
+
+    /// <summary>As <see cref="For(CheckReport)"/>, with the responses' pictures already built (<paramref name="pictures"/>,
+    /// in report order, as <see cref="ResponsePlots.Build(CheckReport, PlotOptions?)"/> makes them): only the pictures
+    /// after a transformation are built here.</summary>
+    public static IReadOnlyDictionary<string, IReadOnlyList<(string Title, string Svg)>> For(CheckReport report, IReadOnlyList<ResponsePictures> pictures)
     {
         ArgumentNullException.ThrowIfNull(report);
-        var result = new Dictionary<string, IReadOnlyList<(string, string)>>(StringComparer.Ordinal);
-        foreach (var response in report.Responses)
+        ArgumentNullException.ThrowIfNull(pictures);
+        if (pictures.Count != report.Responses.Count)
         {
+            throw new ArgumentException("one set of pictures per response, in report order", nameof(pictures));
+        }
+
+        var result = new Dictionary<string, IReadOnlyList<(string, string)>>(StringComparer.Ordinal);
+        for (var r = 0; r < report.Responses.Count; r++)
+        {
+            var response = report.Responses[r];
             var list = new List<(string, string)>();
-            Add(list, ResponsePlots.Build(report.Design, response), string.Empty);
+            Add(list, pictures[r], string.Empty);
             if (response.Remedy is { After: { } after, Applied: { } applied })
             {
                 Add(list, ResponsePlots.Build(report.Design, after), " after " + applied.Name);

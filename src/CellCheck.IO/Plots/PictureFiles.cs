@@ -13,14 +13,18 @@ namespace CellCheck.IO.Plots;
 public static class PictureFiles
 {
     /// <summary>Writes the files; returns the paths written, or the first problem.</summary>
-    public static (IReadOnlyList<string> Written, Problem? Problem) Write(CheckReport report, string folder, IEnumerable<string> inputs, int dpi = PlotRenderer.DefaultDpi, PlotOptions? options = null)
+    public static (IReadOnlyList<string> Written, Problem? Problem) Write(CheckReport report, string folder, IEnumerable<string> inputs, int dpi = PlotRenderer.DefaultDpi, PlotOptions? options = null) =>
+        Write(ResponsePlots.Build(report ?? throw new ArgumentNullException(nameof(report)), options), folder, inputs, dpi);
+
+    /// <summary>Writes the files of pictures already built (one set per response, in report order).</summary>
+    public static (IReadOnlyList<string> Written, Problem? Problem) Write(IReadOnlyList<ResponsePictures> responses, string folder, IEnumerable<string> inputs, int dpi = PlotRenderer.DefaultDpi)
     {
-        ArgumentNullException.ThrowIfNull(report);
+        ArgumentNullException.ThrowIfNull(responses);
         ArgumentNullException.ThrowIfNull(folder);
         var inputList = inputs.ToArray();
         var written = new List<string>();
         var used = new HashSet<string>(StringComparer.OrdinalIgnoreCase);
-        foreach (var pictures in ResponsePlots.Build(report, options))
+        foreach (var pictures in responses)
         {
             var stem = FileSafeName.Of(pictures.Response);
             var name = stem;

@@ -38,13 +38,18 @@ public static class PooledPlot
                 + "variation at all) and are not shown.");
         }
 
-        Panel[] panels =
-        [
-            Qq(report, rows, finite, outliers, options),
-            AgainstFitted(report, rows, finite, outliers),
-            RunOrder(design, report, rows, finite, outliers, notes),
-            SpreadLevel(design, report, notes),
-        ];
+        // the QQ panel (a sort of every studentized residual) beside the others, which add their notes in order; the
+        // per-row columns they read are built first (each on first use)
+        _ = (rows.Lines, rows.Fitted, rows.RunOrder, rows.BlockCodes);
+        var panels = new Panel[4];
+        Parallel.Invoke(
+            () => panels[0] = Qq(report, rows, finite, outliers, options),
+            () =>
+            {
+                panels[1] = AgainstFitted(report, rows, finite, outliers);
+                panels[2] = RunOrder(design, report, rows, finite, outliers, notes);
+                panels[3] = SpreadLevel(design, report, notes);
+            });
         if (finite.Length > PointThinning.MaxPoints)
         {
             notes.Add(PointThinning.Note(finite.Length));

@@ -11,7 +11,14 @@ public static class ResponsePlots
         ArgumentNullException.ThrowIfNull(design);
         ArgumentNullException.ThrowIfNull(report);
         options ??= PlotOptions.Default;
-        return new ResponsePictures(report.Response, CellGridPlot.Build(design, report, options), PooledPlot.Build(design, report, options));
+        // the per-row columns the pictures read, built here one after another (each is built on first use), so that
+        // the two pictures and their panels can be made side by side
+        var rows = report.Rows;
+        _ = (rows.Lines, rows.Cells, rows.Fitted, rows.Studentized, rows.RunOrder, rows.BlockCodes);
+        PlotModel cells = null!;
+        PlotModel pooled = null!;
+        Parallel.Invoke(() => cells = CellGridPlot.Build(design, report, options), () => pooled = PooledPlot.Build(design, report, options));
+        return new ResponsePictures(report.Response, cells, pooled);
     }
 
     /// <summary>The pictures of every response, in report order.</summary>

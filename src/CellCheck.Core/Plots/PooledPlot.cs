@@ -182,7 +182,7 @@ public static class PooledPlot
                 + "(or run_order: file when the rows are in run order).", []);
         }
 
-        var placed = RunSequence.Placed(runOrder, finite); // stable: shared run positions stay in row order
+        var placed = RunPlacement.Placed(runOrder, finite); // stable: shared run positions stay in row order
         if (placed.Length < finite.Length)
         {
             notes.Add(NumberText.Count(finite.Length - placed.Length) + " row(s) without a run position are not in the run-order panel.");

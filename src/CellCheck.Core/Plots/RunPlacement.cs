@@ -2,8 +2,9 @@ using CellCheck.Core.Statistics;
 
 namespace CellCheck.Core.Plots;
 
-/// <summary>The rows of a picture put in run order.</summary>
-internal static class RunSequence
+/// <summary>The rows of a picture put in run order (in the order of the rows given where positions tie; the order
+/// checks' <see cref="Analysis.RunSequence"/> keeps file order instead).</summary>
+internal static class RunPlacement
 {
     /// <summary>Of <paramref name="rows"/>, those with a finite run position, in run order; rows that share a position
     /// keep their order in <paramref name="rows"/> (stable). Whole-number positions spread over at most about twice as

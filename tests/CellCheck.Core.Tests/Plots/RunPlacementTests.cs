@@ -3,7 +3,7 @@ using CellCheck.Core.Statistics;
 
 namespace CellCheck.Core.Tests.Plots;
 
-public sealed class RunSequenceTests
+public sealed class RunPlacementTests
 {
     /// <summary>The plain way: the rows with a finite position, sorted by position stably (LINQ's OrderBy, equal
     /// positions in row order; from the radix sort's threshold on, the stable radix sort, which puts −0 before 0).</summary>
@@ -44,7 +44,7 @@ public sealed class RunSequenceTests
         {
             var runOrder = Positions(name, n, random);
             var rows = Enumerable.Range(0, n).Where(i => i % 5 != 4).OrderBy(_ => random.Next()).ToArray(); // a subset, in any order
-            Assert.Equal(Sorted(runOrder, rows), RunSequence.Placed(runOrder, rows));
+            Assert.Equal(Sorted(runOrder, rows), RunPlacement.Placed(runOrder, rows));
         }
     }
 
@@ -52,8 +52,8 @@ public sealed class RunSequenceTests
     public void Rows_without_a_finite_position_are_left_out_and_none_left_gives_an_empty_order()
     {
         double[] runOrder = [double.NaN, 3, double.NegativeInfinity, 1, 3];
-        Assert.Equal([3, 1, 4], RunSequence.Placed(runOrder, [0, 1, 2, 3, 4]));
-        Assert.Equal([4, 1], RunSequence.Placed(runOrder, [4, 1]));
-        Assert.Empty(RunSequence.Placed(runOrder, [0, 2]));
+        Assert.Equal([3, 1, 4], RunPlacement.Placed(runOrder, [0, 1, 2, 3, 4]));
+        Assert.Equal([4, 1], RunPlacement.Placed(runOrder, [4, 1]));
+        Assert.Empty(RunPlacement.Placed(runOrder, [0, 2]));
     }
 }

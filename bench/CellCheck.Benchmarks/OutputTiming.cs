@@ -40,6 +40,7 @@ internal static class OutputTiming
                     Write(folder, "pooled.svg", s => PlotRenderer.WriteSvg(p.Pooled, s));
                 }
             });
+            Time("picture files", () => PictureFiles.Write(pictures, folder, [], PlotRenderer.DefaultDpi));
             Time("html page", () =>
             {
                 var context = new HtmlContext("0", DateTimeOffset.UnixEpoch, "bench") { Pictures = HtmlPictures.For(report) };

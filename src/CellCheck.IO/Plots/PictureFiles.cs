@@ -33,24 +33,37 @@ public static class PictureFiles
                 name = stem + "-" + k.ToString(System.Globalization.CultureInfo.InvariantCulture);
             }
 
-            foreach (var (suffix, model) in (ReadOnlySpan<(string, PlotModel)>)[("cells", pictures.Cells), ("pooled", pictures.Pooled)])
+            // the response's four files drawn side by side into memory (each alone), then written in order
+            (string Path, PlotModel Model, bool Png)[] files =
+            [
+                (Path.Combine(folder, name + "-cells.png"), pictures.Cells, true),
+                (Path.Combine(folder, name + "-cells.svg"), pictures.Cells, false),
+                (Path.Combine(folder, name + "-pooled.png"), pictures.Pooled, true),
+                (Path.Combine(folder, name + "-pooled.svg"), pictures.Pooled, false),
+            ];
+            var drawn = new MemoryStream[files.Length];
+            Parallel.For(0, files.Length, k =>
             {
-                var png = Path.Combine(folder, name + "-" + suffix + ".png");
-                var problem = AtomicFile.Write(png, inputList, s => PlotRenderer.WritePng(model, s, dpi));
+                drawn[k] = new MemoryStream();
+                if (files[k].Png)
+                {
+                    PlotRenderer.WritePng(files[k].Model, drawn[k], dpi);
+                }
+                else
+                {
+                    PlotRenderer.WriteSvg(files[k].Model, drawn[k]);
+                }
+            });
+            for (var k = 0; k < files.Length; k++)
+            {
+                var bytes = drawn[k];
+                var problem = AtomicFile.Write(files[k].Path, inputList, s => s.Write(bytes.GetBuffer(), 0, (int)bytes.Length));
                 if (problem is not null)
                 {
                     return (written, problem);
                 }
 
-                written.Add(png);
-                var svg = Path.Combine(folder, name + "-" + suffix + ".svg");
-                problem = AtomicFile.Write(svg, inputList, s => PlotRenderer.WriteSvg(model, s));
-                if (problem is not null)
-                {
-                    return (written, problem);
-                }
-
-                written.Add(svg);
+                written.Add(files[k].Path);
             }
         }
 

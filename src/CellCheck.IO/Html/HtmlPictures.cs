@@ -43,10 +43,14 @@ public static class HtmlPictures
         return result;
     }
 
+    /// <summary>Adds the two pictures, drawn side by side.</summary>
     private static void Add(List<(string, string)> list, ResponsePictures pictures, string suffix)
     {
-        list.Add(("Residuals within each cell of " + pictures.Response + suffix + " (normal QQ plots or dot strips on a shared axis)", Svg(pictures.Cells)));
-        list.Add(("Pooled residuals of " + pictures.Response + suffix + ": QQ plot, against fitted values, against run order, spread against level", Svg(pictures.Pooled)));
+        string cells = null!;
+        string pooled = null!;
+        Parallel.Invoke(() => cells = Svg(pictures.Cells), () => pooled = Svg(pictures.Pooled));
+        list.Add(("Residuals within each cell of " + pictures.Response + suffix + " (normal QQ plots or dot strips on a shared axis)", cells));
+        list.Add(("Pooled residuals of " + pictures.Response + suffix + ": QQ plot, against fitted values, against run order, spread against level", pooled));
     }
 
     private static string Svg(PlotModel model)

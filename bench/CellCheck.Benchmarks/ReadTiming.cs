@@ -5,8 +5,9 @@ using CellCheck.IO.Design;
 
 namespace CellCheck.Benchmarks;
 
-/// <summary>Times the parts of reading a design's data: the encoding scan alone, the read on one thread and the read in
-/// two ranges (each after the scan, which the tool runs beside the parse), each with processor time.</summary>
+/// <summary>Times the parts of reading a design's data: the encoding scan alone, the read on one thread, the read in
+/// two ranges on two threads and the read in ranges as the tool reads (each beside the scan, as the tool runs it), each
+/// with processor time.</summary>
 internal static class ReadTiming
 {
     /// <param name="warmUp">A small design read first (compiling the reader), or null: then the first read pays for
@@ -28,7 +29,8 @@ internal static class ReadTiming
         Time("read again", () => DataReader.Read(file));
         Time("encoding scan", () => TableOpener.ScanText(file.DataPath));
         Time("read, one thread", () => DataReader.Read(file, long.MaxValue));
-        Time("read, two ranges", () => DataReader.Read(file, DataReader.SplitBytes));
+        Time("read, two ranges", () => DataReader.Read(file, DataReader.SplitBytes, 2, 2));
+        Time("read, ranges", () => DataReader.Read(file, DataReader.SplitBytes)); // as the tool: RangesPerThread a processor
     }
 
     private static void Time(string what, Func<object?> step)

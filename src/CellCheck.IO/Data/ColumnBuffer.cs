@@ -6,8 +6,8 @@ namespace CellCheck.IO.Data;
 /// buffer's chunks can be moved onto the end (<see cref="Append"/>) without copying them.
 /// </summary>
 /// <remarks>A buffer may start in space reserved for it in a larger array (<see cref="ColumnBuffer{T}(T[], int, int)"/>):
-/// the two ranges of a file read on two threads write into one array sized to the file's lines, the second after the
-/// first's lines, and are joined by moving the second down over the first's unused end; when the array is then full it
+/// the ranges of a file read on several threads write into one array sized to the file's lines, each after the lines
+/// of the ranges before it, and are joined by moving each down over the unused ends before it; when the array is then full it
 /// is handed over as it is. Only past its reserved space does such a buffer grow by chunks.</remarks>
 internal sealed class ColumnBuffer<T>
 {
@@ -70,7 +70,11 @@ internal sealed class ColumnBuffer<T>
 
         if (_chunks.Count == 0 && next._chunks.Count == 0 && ReferenceEquals(_current, next._current) && next._start >= _start + _used)
         {
-            Array.Copy(_current, next._start, _current, _start + _used, next._used);
+            if (next._start != _start + _used)
+            {
+                Array.Copy(_current, next._start, _current, _start + _used, next._used);
+            }
+
             _used += next._used;
             _room = _used; // the rest of the array may hold nothing more of this column
         }

@@ -1,20 +1,25 @@
 namespace CellCheck.IO.Data;
 
 /// <summary>
-/// One array per column for a file read in two ranges (<see cref="SplitReader"/>), sized to the file's data lines:
-/// the first range writes from the start, the second after the first range's lines, so joining them moves at most the
-/// second range down over the first's unused end, and a column that fills its array is handed over without a copy.
-/// At ten million rows that is the 400 MB of chunks a read would otherwise copy into exact arrays, and their page faults.
+/// One array per column for a file read in ranges (<see cref="SplitReader"/>), sized to the file's data lines: each
+/// range writes from where the lines of the ranges before it end, so joining them moves at most a range down over the
+/// unused ends before it, and a column that fills its array is handed over without a copy. At ten million rows that is
+/// the 400 MB of chunks a read would otherwise copy into exact arrays, and their page faults.
 /// </summary>
 internal sealed class ColumnReserve
 {
-    private readonly int _firstLines;
-    private readonly int _secondLines;
+    private readonly int[] _offsets;
+    private readonly long[] _lines;
 
-    private ColumnReserve(ColumnMap columns, int firstLines, int secondLines)
+    private ColumnReserve(ColumnMap columns, long[] lines, int length)
     {
-        (_firstLines, _secondLines) = (firstLines, secondLines);
-        var length = firstLines + secondLines;
+        _lines = lines;
+        _offsets = new int[lines.Length];
+        for (var r = 1; r < lines.Length; r++)
+        {
+            _offsets[r] = _offsets[r - 1] + (int)lines[r - 1];
+        }
+
         Factors = Array.ConvertAll(columns.Factors, _ => GC.AllocateUninitializedArray<int>(length));
         Responses = Array.ConvertAll(columns.Responses, _ => GC.AllocateUninitializedArray<double>(length));
         RunOrder = columns.RunOrder is null ? null : GC.AllocateUninitializedArray<double>(length);
@@ -25,8 +30,13 @@ internal sealed class ColumnReserve
     /// might hold no row, so chunks that grow with the rows kept hold less) or the lines are too many for one array.</summary>
     public static ColumnReserve? For(ColumnMap columns, SplitPlan plan, bool filtered)
     {
-        var lines = (long)plan.FirstLines + plan.SecondLines;
-        return filtered || plan.FirstLines < 0 || lines > Array.MaxLength ? null : new ColumnReserve(columns, plan.FirstLines, (int)plan.SecondLines);
+        var lines = 0L;
+        foreach (var count in plan.Lines)
+        {
+            lines += count;
+        }
+
+        return filtered || plan.Lines.Any(l => l < 0) || lines > Array.MaxLength ? null : new ColumnReserve(columns, plan.Lines, (int)lines);
     }
 
     public int[][] Factors { get; }
@@ -37,7 +47,6 @@ internal sealed class ColumnReserve
 
     public int[] Lines { get; }
 
-    /// <summary>A buffer writing into one of these arrays, in the part of the first or the second range.</summary>
-    public ColumnBuffer<T> Buffer<T>(T[] array, bool second) =>
-        second ? new ColumnBuffer<T>(array, _firstLines, _secondLines) : new ColumnBuffer<T>(array, 0, _firstLines);
+    /// <summary>A buffer writing into one of these arrays, in the part of range <paramref name="range"/>.</summary>
+    public ColumnBuffer<T> Buffer<T>(T[] array, int range) => new(array, _offsets[range], (int)_lines[range]);
 }

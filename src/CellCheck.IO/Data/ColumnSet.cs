@@ -3,7 +3,7 @@ using CellCheck.IO.Design;
 namespace CellCheck.IO.Data;
 
 /// <summary>
-/// The columns being built from the rows of a table (all of them, or one range of a file read in two ranges): one
+/// The columns being built from the rows of a table (all of them, or one range of a file read in ranges): one
 /// builder per factor, block and response, the run order, the data-file line of every kept row and the count of rows
 /// the where filter leaves out.
 /// </summary>
@@ -15,15 +15,15 @@ internal sealed class ColumnSet
     private readonly IReadOnlyList<WhereCondition> _where;
 
     /// <param name="origins">Per response, the origin known from earlier rows (null entries, or no array, when none is).</param>
-    /// <param name="reserve">Arrays to write the columns into, as the first or the second range of a split read (or none).</param>
+    /// <param name="reserve">Arrays to write the columns into, as the given range of a split read (or none).</param>
     public ColumnSet(DesignFile design, ColumnMap columns, NumberSyntax numbers, ResponseOrigin?[]? origins = null,
-        (ColumnReserve Arrays, bool Second)? reserve = null)
+        (ColumnReserve Arrays, int Range)? reserve = null)
     {
         _columns = columns;
         _missing = new MissingTokens(design.Options.Missing);
         _factorNames = [.. design.Factors.Select(f => f.Name), .. design.Blocks.Select(b => b.Name)];
         _where = design.Options.Where.Conditions;
-        ColumnBuffer<T>? Space<T>(T[]? array) => reserve is { } r && array is not null ? r.Arrays.Buffer(array, r.Second) : null;
+        ColumnBuffer<T>? Space<T>(T[]? array) => reserve is { } r && array is not null ? r.Arrays.Buffer(array, r.Range) : null;
         var space = reserve?.Arrays;
         Factors = new LevelInterner[_factorNames.Length];
         for (var f = 0; f < Factors.Length; f++)

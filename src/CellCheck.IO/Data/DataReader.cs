@@ -10,7 +10,7 @@ namespace CellCheck.IO.Data;
 /// sheet. Only the columns the design names are kept. A missing factor or block value excludes the row for every
 /// response; a missing or non-numeric response value excludes it for that response; rows outside the design's
 /// <c>where</c> filter are counted. Every exclusion is kept with its line and reason. A large delimited file without
-/// quotes is read in two ranges on two threads (<see cref="SplitReader"/>), to the same data.
+/// quotes is read in ranges on every processor (<see cref="SplitReader"/>), to the same data.
 /// </summary>
 public static class DataReader
 {
@@ -18,20 +18,27 @@ public static class DataReader
     /// a fault, when found, is reported in place of whatever the parse gave.</summary>
     public const long ConcurrentScanBytes = 8 << 20;
 
-    /// <summary>Delimited files above this size without quotes are read in two ranges on two threads (<see cref="SplitReader"/>).</summary>
+    /// <summary>Delimited files above this size without quotes are read in ranges on several threads (<see cref="SplitReader"/>).</summary>
     internal const long SplitBytes = 8 << 20;
+
+    /// <summary>Ranges per reading thread: more ranges than threads, so that a thread slowed by other work (the encoding
+    /// check beside the parse, another process) reads fewer of them and the threads end together.</summary>
+    internal const int RangesPerThread = 2;
 
     public static LoadResult<DesignData> Read(DesignFile design) => Read(design, SplitBytes);
 
-    /// <param name="splitBytes">The size above which a delimited file is read on two threads (tests lower it).</param>
-    internal static LoadResult<DesignData> Read(DesignFile design, long splitBytes)
+    /// <param name="splitBytes">The size above which a delimited file is read on several threads (tests lower it).</param>
+    /// <param name="threads">Threads that read a split file (at least two; the processor count when null).</param>
+    /// <param name="ranges">Ranges a split file is cut into (at least two; <see cref="RangesPerThread"/> a thread when null).</param>
+    internal static LoadResult<DesignData> Read(DesignFile design, long splitBytes, int? threads = null, int? ranges = null)
     {
         ArgumentNullException.ThrowIfNull(design);
         var path = design.DataPath;
         var scan = TableOpener.IsText(path) && File.Exists(path) && new FileInfo(path).Length > ConcurrentScanBytes
             ? Task.Run(() => ScanQuietly(path))
             : null;
-        var result = Parse(design, scan is not null, splitBytes);
+        var readers = Math.Max(2, threads ?? Environment.ProcessorCount);
+        var result = Parse(design, scan is not null, splitBytes, readers, Math.Max(2, ranges ?? (RangesPerThread * readers)));
         return scan?.Result is { } fault ? LoadResult<DesignData>.Failure(TextFiles.TextProblems.For(fault, path, design: false)) : result;
     }
 
@@ -48,7 +55,7 @@ public static class DataReader
         }
     }
 
-    private static LoadResult<DesignData> Parse(DesignFile design, bool scanned, long splitBytes)
+    private static LoadResult<DesignData> Parse(DesignFile design, bool scanned, long splitBytes, int threads, int ranges)
     {
         var opened = TableOpener.Open(design, scanned);
         if (opened.Problem is not null)
@@ -59,8 +66,8 @@ public static class DataReader
         using var table = opened.Table!;
         try
         {
-            return table is CsvRows csv && SplitPlan.Find(design.DataPath, splitBytes) is { } plan
-                ? SplitReader.Read(design, csv, plan)
+            return table is CsvRows csv && SplitPlan.Find(design.DataPath, splitBytes, ranges) is { } plan
+                ? SplitReader.Read(design, csv, plan, threads)
                 : RowReader.Read(design, table);
         }
         catch (InvalidDataException ex)

@@ -12,7 +12,7 @@ namespace CellCheck.IO.Data;
 /// (magnitude above 1e100 or, other than 0, below 1e-100) or <c>thousands-separator</c>.
 /// </summary>
 /// <param name="origin">The origin, when it is known from rows before the first one this builder reads (the rows of a
-/// file read in two ranges); null to take the first usable value read.</param>
+/// file read in ranges); null to take the first usable value read.</param>
 /// <param name="values">Where the values go (a buffer in reserved space), or null for a buffer of its own.</param>
 internal sealed class ResponseBuilder(string name, string? unit, MissingTokens missing, NumberSyntax syntax, ResponseOrigin? origin = null,
     ColumnBuffer<double>? values = null)

@@ -1,18 +1,18 @@
 using CellCheck.Core.Data;
-using CellCheck.Core.Problems;
 using CellCheck.IO.Design;
 
 namespace CellCheck.IO.Data;
 
 /// <summary>
-/// Reads a delimited text file cut in two ranges (<see cref="SplitPlan"/>) on two threads, and joins the columns in
-/// file order: the data are those the one-thread reader gives, value for value. The second range stores its response
-/// values relative to the first range's origins, which the first thread hands over as soon as it has them all (or
-/// when its range ends); a fault in the first range is reported and the second range's rows are dropped unread.
+/// Reads a delimited text file cut in ranges (<see cref="SplitPlan"/>) on several threads, and joins the columns in
+/// file order: the data are those the one-thread reader gives, value for value. The calling thread reads the first
+/// range and then, like each helper thread, takes the next range not yet taken (<see cref="RangeRun"/>), so a thread
+/// slowed by other work reads fewer ranges. The first problem in file order is reported.
 /// </summary>
 internal static class SplitReader
 {
-    public static LoadResult<DesignData> Read(DesignFile design, CsvRows first, SplitPlan plan)
+    /// <param name="threads">Threads that read, the calling one included (no more than the ranges).</param>
+    public static LoadResult<DesignData> Read(DesignFile design, CsvRows first, SplitPlan plan, int threads)
     {
         var columns = ColumnMap.Resolve(design, first.Header);
         if (columns.Problems.Count > 0)
@@ -20,78 +20,60 @@ internal static class SplitReader
             return LoadResult<DesignData>.Failure(columns.Problems);
         }
 
-        var origins = new TaskCompletionSource<ResponseOrigin?[]>(TaskCreationOptions.RunContinuationsAsynchronously);
-        using var stop = new CancellationTokenSource();
         var reserve = ColumnReserve.For(columns, plan, design.Options.Where.Conditions.Count > 0);
-        var second = Task.Run(() => ReadSecond(design, columns, first.Numbers, plan, origins.Task, reserve, stop.Token));
-        var head = new ColumnSet(design, columns, first.Numbers, reserve: reserve is null ? null : (reserve, false));
-        var whole = false;
+        var run = new RangeRun(design, columns, first.Numbers, plan, reserve);
+        var helpers = new Task[Math.Clamp(threads - 1, 0, plan.Count - 1)];
+        for (var h = 0; h < helpers.Length; h++)
+        {
+            helpers[h] = Task.Run(run.TakeRanges);
+        }
+
+        var head = new ColumnSet(design, columns, first.Numbers, reserve: reserve is null ? null : (reserve, 0));
         try
         {
-            first.StopLine = plan.FirstLine;
+            first.StopLine = plan.FirstLines[1];
             while (first.Next())
             {
                 head.Take(first);
-                if (!origins.Task.IsCompleted && head.OriginsKnown)
+                if (!run.OriginsAfter(0).IsCompleted && head.OriginsKnown)
                 {
-                    origins.SetResult(head.Origins());
+                    run.HandOn(0, head.Origins());
                 }
             }
 
-            whole = first.Fault is null;
-        }
-        finally
-        {
-            origins.TrySetResult(head.Origins());
-            if (!whole)
+            if (first.Fault is not null)
             {
-                stop.Cancel();
-                ((IAsyncResult)second).AsyncWaitHandle.WaitOne();
+                run.Fail(0);
             }
         }
+        catch
+        {
+            // the exception is the problem reported: the other ranges stop, and end before it leaves
+            run.Fail(0);
+            run.HandOn(0, head.Origins());
+            Task.WaitAll(helpers);
+            throw;
+        }
 
+        run.HandOn(0, head.Origins());
+        run.TakeRanges();
+        Task.WaitAll(helpers);
         if (first.Fault is { } fault)
         {
             return LoadResult<DesignData>.Failure(fault);
         }
 
-        var (tail, problem) = second.GetAwaiter().GetResult();
-        if (problem is not null)
+        for (var r = 1; r < plan.Count; r++)
         {
-            return LoadResult<DesignData>.Failure(problem);
-        }
-
-        head.Append(tail!);
-        return RowReader.Finish(design, first, columns, head);
-    }
-
-    /// <summary>The second range's columns, or the first problem met in it.</summary>
-    private static (ColumnSet? Columns, Problem? Problem) ReadSecond(DesignFile design, ColumnMap columns, NumberSyntax numbers, SplitPlan plan,
-        Task<ResponseOrigin?[]> origins, ColumnReserve? reserve, CancellationToken stop)
-    {
-        CsvRows? rows = null;
-        try
-        {
-            rows = new CsvRows(design.DataPath, new RangeStream(design.DataPath, plan.Header, plan.Start), design.Options.Delimiter, numbers, plan.FirstLine);
-            var set = new ColumnSet(design, columns, numbers, origins.GetAwaiter().GetResult(), reserve is null ? null : (reserve, true));
-            while (!stop.IsCancellationRequested && rows.Next())
+            var (set, problem) = run.Result(r);
+            if (problem is not null)
             {
-                set.Take(rows);
+                return LoadResult<DesignData>.Failure(problem);
             }
 
-            return rows.Fault is { } fault ? (null, fault) : (set, null);
+            head.Append(set!);
         }
-        catch (InvalidDataException ex)
-        {
-            return (null, DataReader.RaggedRow(design, rows?.NextLine ?? plan.FirstLine, ex));
-        }
-        catch (IOException ex)
-        {
-            return (null, DataReader.Unreadable(design, ex));
-        }
-        finally
-        {
-            rows?.Dispose();
-        }
+
+        return RowReader.Finish(design, first, columns, head);
     }
 }

@@ -7,7 +7,8 @@ using CellCheck.IO.Tests.Hostile;
 
 namespace CellCheck.IO.Tests.Data;
 
-/// <summary>A delimited file read in two ranges on two threads gives the data the one-thread reader gives, bit for bit.</summary>
+/// <summary>A delimited file read in ranges on several threads gives the data the one-thread reader gives, bit for bit,
+/// however many ranges and threads (every read below is compared with the one-thread read in 2 to 9 ranges on 2 to 4 threads).</summary>
 public sealed class SplitReaderTests
 {
     private const string TwoFactors = "data: data.csv\nfactors: [a, b]\nresponses: [y]\n";
@@ -121,7 +122,7 @@ public sealed class SplitReaderTests
         }
 
         using var t = new TempDesign(text.ToString());
-        Assert.Equal('\n', text[(int)SplitPlan.Find(t.DataPath, 0)!.Start]);
+        Assert.Equal('\n', text[(int)SplitPlan.Find(t.DataPath, 0)!.Starts[1]]);
         Same(t);
     }
 
@@ -134,6 +135,74 @@ public sealed class SplitReaderTests
         using var t = new TempDesign(text, TwoFactors);
         var p = Assert.Single(Same(t).Problems);
         Assert.Equal(Math.Min(260, raggedInFirstHalf) + 2, p.Line);
+    }
+
+    [Fact]
+    public void Responses_whose_first_values_lie_in_later_ranges_are_stored_from_the_first_value_in_file_order()
+    {
+        // y is missing in the first five sixths of the rows, z in the first third; w has a value only near the end
+        var text = Rows(600, i => string.Join(',', "a" + (i % 4), "b" + (i % 3),
+            i < 500 ? "NA" : "1000" + (i % 7).ToString(CultureInfo.InvariantCulture) + "." + (i % 13).ToString(CultureInfo.InvariantCulture),
+            i < 200 ? "" : (2.5 + (i % 11)).ToString(CultureInfo.InvariantCulture),
+            i == 590 ? "123456789.125" : "NA"), "a,b,y,z,w");
+        using var t = new TempDesign(text, "data: data.csv\nfactors: [a, b]\nresponses: [y, z, w]\nmissing: [NA]\n");
+        var d = Same(t).Value!;
+        Assert.Equal(10003.6, d.Responses[0].Origin); // row 500: 1000, 500 mod 7, ".", 500 mod 13
+        Assert.Equal(123456789.125, d.Responses[2].Origin);
+    }
+
+    [Fact]
+    public void Cuts_fall_at_line_starts_and_number_the_lines_of_the_file()
+    {
+        string[] endings = ["\n", "\r\n", "\r\r\n", "\n\n"];
+        var text = new StringBuilder("a,b,y\r\n");
+        for (var i = 0; i < 400; i++)
+        {
+            text.Append('a').Append(i % 4).Append(",b,").Append(new string('7', 1 + (i % 9))).Append(endings[i / 7 % endings.Length]);
+        }
+
+        text.Append("a1,b,5"); // a last line without a break
+        using var t = new TempDesign(text.ToString());
+        var bytes = File.ReadAllBytes(t.DataPath);
+        for (var parts = 2; parts <= 12; parts++)
+        {
+            var plan = SplitPlan.Find(t.DataPath, 0, parts)!;
+            Assert.Equal(parts, plan.Count);
+            Assert.Equal(2, plan.FirstLines[0]);
+            for (var r = 1; r < plan.Count; r++)
+            {
+                Assert.True(plan.Starts[r] > plan.Starts[r - 1]);
+                Assert.Equal((byte)'\n', bytes[plan.Starts[r] - 1]);
+                Assert.Equal(1 + Breaks(bytes.AsSpan(0, (int)plan.Starts[r])), plan.FirstLines[r]);
+                Assert.Equal(plan.FirstLines[r] - plan.FirstLines[r - 1], plan.Lines[r - 1]);
+            }
+
+            Assert.Equal(Breaks(bytes), plan.Lines.Sum()); // every line but the header, and the last one, which has no break
+        }
+
+        Assert.Equal(3, SplitPlan.Find(t.DataPath, 0, 3)!.Count);
+    }
+
+    [Fact]
+    public void A_file_of_few_long_lines_is_cut_in_fewer_ranges_than_asked()
+    {
+        var text = Rows(3, i => $"a{i},b,{new string('1', 2000)}");
+        using var t = new TempDesign(text);
+        var plan = SplitPlan.Find(t.DataPath, 0, 8)!;
+        Assert.Equal(3, plan.Count); // one line a range: the header's range holds the first row
+        Same(t);
+    }
+
+    /// <summary>Line breaks as the reader counts them: CR LF, a lone CR or a lone LF each end a line.</summary>
+    private static int Breaks(ReadOnlySpan<byte> bytes)
+    {
+        var count = 0;
+        for (var i = 0; i < bytes.Length; i++)
+        {
+            count += bytes[i] == '\n' || (bytes[i] == '\r' && (i + 1 == bytes.Length || bytes[i + 1] != '\n')) ? 1 : 0;
+        }
+
+        return count;
     }
 
     [Fact]
@@ -197,13 +266,20 @@ public sealed class SplitReaderTests
         return Same(t.DesignPath);
     }
 
-    /// <summary>Reads the design's data with one thread and with two; asserts they agree and returns the result.</summary>
+    /// <summary>Ranges and threads of the split reads compared with the one-thread read.</summary>
+    private static readonly (int Ranges, int Threads)[] Splits = [(2, 2), (3, 2), (4, 2), (5, 4), (9, 3)];
+
+    /// <summary>Reads the design's data with one thread and in ranges on several; asserts they agree and returns the result.</summary>
     private static LoadResult<DesignData> Same(string designPath)
     {
         var design = DesignReader.Read(designPath);
         Assert.True(design.Ok, designPath);
         var one = DataReader.Read(design.Value!, long.MaxValue);
-        SameData.Assert(one, DataReader.Read(design.Value!, 0));
+        foreach (var (ranges, threads) in Splits)
+        {
+            SameData.Assert(one, DataReader.Read(design.Value!, 0, threads, ranges));
+        }
+
         return one;
     }
 }

@@ -154,9 +154,9 @@ public static class PooledPlot
         }
 
         var fitted = rows.Fitted;
-        var ys = Gather(rows.Studentized, finite);
-        var (xLow, xHigh) = Range(fitted, finite);
-        var (yLow, yHigh) = Range(ys);
+        var ys = PlotValues.Gather(rows.Studentized, finite);
+        var (xLow, xHigh) = PlotValues.Range(fitted, finite);
+        var (yLow, yHigh) = PlotValues.Range(ys);
         var x = AxisScale.Linear(PlotText.WithUnit("fitted " + report.Response, report.Unit), xLow, xHigh);
         var y = AxisScale.Linear(Studentized, Math.Min(0, yLow), Math.Max(0, yHigh), 6);
         var drawn = Drawn(finite, ys, rows, outliers);
@@ -165,7 +165,7 @@ public static class PooledPlot
             (ys, finite) = (drawn.Select(k => ys[k]).ToArray(), drawn.Select(k => finite[k]).ToArray());
         }
 
-        var xs = Gather(fitted, finite);
+        var xs = PlotValues.Gather(fitted, finite);
 
         var series = new List<Series> { new StraightLine(SeriesRole.Guide, 0, 0) };
         series.AddRange(PointsWithHighlights(xs, finite, ys, rows, outliers));
@@ -198,8 +198,8 @@ public static class PooledPlot
         var (scale, label) = TimeScale(first, span, design.RunOrder);
         var (offset, unit) = (scale.HasValue ? first : 0, scale ?? 1);
         double At(int row) => (runOrder[row] - offset) / unit;
-        var ys = Gather(rows.Studentized, placed);
-        var (yLow, yHigh) = Range(ys);
+        var ys = PlotValues.Gather(rows.Studentized, placed);
+        var (yLow, yHigh) = PlotValues.Range(ys);
         var x = AxisScale.Linear(label, At(placed[0]), At(placed[^1]));
         var y = AxisScale.Linear(Studentized, Math.Min(0, yLow), Math.Max(0, yHigh), 6);
         var series = new List<Series> { new StraightLine(SeriesRole.Guide, 0, 0) };
@@ -370,35 +370,6 @@ public static class PooledPlot
 
         var slope = sxy / sxx;
         return new LineCoefficients(my - (slope * mx), slope);
-    }
-
-    /// <summary>The values at the given rows, in their order.</summary>
-    private static double[] Gather(double[] values, int[] rows)
-    {
-        var result = new double[rows.Length];
-        for (var k = 0; k < rows.Length; k++)
-        {
-            result[k] = values[rows[k]];
-        }
-
-        return result;
-    }
-
-    /// <summary>The smallest and largest of the values at <paramref name="rows"/> (all when null), compared as
-    /// <see cref="Enumerable.Min(IEnumerable{double})"/> and Max compare finite values: the first of equal extremes kept.</summary>
-    private static (double Low, double High) Range(double[] values, int[]? rows = null)
-    {
-        var count = rows?.Length ?? values.Length;
-        var low = values[rows is null ? 0 : rows[0]];
-        var high = low;
-        for (var k = 1; k < count; k++)
-        {
-            var v = values[rows is null ? k : rows[k]];
-            low = v < low ? v : low;
-            high = v > high ? v : high;
-        }
-
-        return (low, high);
     }
 
     private static IEnumerable<Series> PointsWithHighlights(double[] xs, int[] rowIndex, double[] ys, RowDiagnostics rows, Dictionary<int, OutlierRow> outliers)

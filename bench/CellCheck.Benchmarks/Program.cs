@@ -7,7 +7,7 @@ namespace CellCheck.Benchmarks;
 /// Benchmark entry point.
 /// <c>generate ROWS CELLS DIR</c> writes the seeded screen data and its design;
 /// <c>floor FILE</c> times a bare Sep pass over a file (the parse floor);
-/// <c>read DESIGN [WARMUP]</c> times the encoding scan and the read on one thread and in two ranges;
+/// <c>read DESIGN [WARMUP]</c> times the encoding scan and the read on one thread, in two ranges and in ranges as the tool cuts them;
 /// <c>pooled ROWS</c> times the pooled normality kernels;
 /// <c>boxcox DESIGN [REPEATS]</c> times the parts of the Box-Cox fit of the blocked model;
 /// <c>dw ROWS CELLS</c> times the Durbin-Watson moment kernels;

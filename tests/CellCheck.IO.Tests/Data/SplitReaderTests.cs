@@ -14,7 +14,7 @@ public sealed class SplitReaderTests
     private const string TwoFactors = "data: data.csv\nfactors: [a, b]\nresponses: [y]\n";
 
     [Fact]
-    public void The_demo_data_files_read_in_two_ranges_as_in_one()
+    public void The_demo_data_files_read_in_ranges_as_in_one()
     {
         var root = new DirectoryInfo(AppContext.BaseDirectory);
         while (!File.Exists(Path.Combine(root.FullName, "CellCheck.sln")))
@@ -31,7 +31,7 @@ public sealed class SplitReaderTests
     }
 
     [Fact]
-    public void Levels_that_first_appear_in_the_second_half_follow_those_of_the_first_half()
+    public void Levels_that_first_appear_in_later_ranges_follow_those_of_earlier_ones()
     {
         var text = Rows(400, i => $"{(i < 200 ? "L" + (i % 5) : "L" + (i % 37))},{(i < 200 ? i % 3 : (i % 11) * 0.5).ToString(CultureInfo.InvariantCulture)},B{i % (i < 200 ? 2 : 9)},{i % 13}.{i % 7}", "a,b,c,y");
         using var t = new TempDesign(text, "data: data.csv\nfactors: [a, {column: b, kind: numeric}]\nblocks: [c]\nresponses: [y]\n");
@@ -74,7 +74,7 @@ public sealed class SplitReaderTests
     [InlineData(250, false)]
     [InlineData(251, false)]
     [InlineData(498, false)]
-    public void Runs_numbered_one_a_row_are_counted_across_both_ranges_until_a_number_breaks_the_count(int broken, bool consecutive)
+    public void Runs_numbered_one_a_row_are_counted_across_ranges_until_a_number_breaks_the_count(int broken, bool consecutive)
     {
         // rows numbered 101, 102, ...; the row at index broken (none when −1) repeats the number before it
         var text = Rows(500, i => $"a{i % 3},b{i % 2},{i % 11}.{i % 3},{(i == broken ? 100 + i : 101 + i).ToString(CultureInfo.InvariantCulture)}", "a,b,y,run");

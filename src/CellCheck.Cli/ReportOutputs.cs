@@ -48,8 +48,7 @@ internal static class ReportOutputs
         }
 
         // the plot models are built once for the page and the picture files (at ten million rows each build sorts them)
-        var wantsPictures = outDir is not null && pictureDpi is not null;
-        var plots = pages.Count > 0 || wantsPictures ? ResponsePlots.Build(run.Report) : null;
+        var plots = pages.Count > 0 || (outDir is not null && pictureDpi is not null) ? ResponsePlots.Build(run.Report) : null;
         if (pages.Count > 0)
         {
             var context = new HtmlContext(FileDigest.Sha256(run.Design.DataPath), DateTimeOffset.UtcNow, ToolVersion.Text)
@@ -80,9 +79,9 @@ internal static class ReportOutputs
             output.WriteLine("Wrote " + target);
         }
 
-        if (wantsPictures)
+        if (plots is not null && outDir is not null && pictureDpi is { } dpi)
         {
-            var (pictures, problem) = PictureFiles.Write(plots!, outDir!, inputs, pictureDpi!.Value);
+            var (pictures, problem) = PictureFiles.Write(plots, outDir, inputs, dpi);
             foreach (var path in pictures)
             {
                 output.WriteLine("Wrote " + path);

@@ -18,9 +18,6 @@ internal sealed class RangeRun(DesignFile design, ColumnMap columns, NumberSynta
     private int _taken; // the last range taken (the first is the caller's)
     private int _faulty = int.MaxValue; // the earliest range known to hold a problem: the ranges after it are not read
 
-    /// <summary>The origins known after the rows of <paramref name="range"/> and the ranges before it.</summary>
-    public Task<ResponseOrigin?[]> OriginsAfter(int range) => _origins[range].Task;
-
     /// <summary>Hands on the origins known after <paramref name="range"/> (the first call counts).</summary>
     public void HandOn(int range, ResponseOrigin?[] origins) => _origins[range].TrySetResult(origins);
 
@@ -39,6 +36,20 @@ internal sealed class RangeRun(DesignFile design, ColumnMap columns, NumberSynta
     /// <summary>The columns read from <paramref name="range"/> (after <see cref="TakeRanges"/> has ended on every
     /// thread), or its problem; neither when it was not read because a range before it holds a problem.</summary>
     public (ColumnSet? Columns, Problem? Problem) Result(int range) => _results[range];
+
+    /// <summary>Takes the rows of <paramref name="range"/> into <paramref name="set"/>, handing its origins on as soon
+    /// as all are known; stops early when a range before it holds a problem.</summary>
+    public void Fill(int range, CsvRows rows, ColumnSet set)
+    {
+        while (range < Volatile.Read(ref _faulty) && rows.Next())
+        {
+            set.Take(rows);
+            if (!_origins[range].Task.IsCompleted && set.OriginsKnown)
+            {
+                HandOn(range, set.Origins());
+            }
+        }
+    }
 
     /// <summary>Reads ranges not yet taken until none is left.</summary>
     public void TakeRanges()
@@ -65,15 +76,7 @@ internal sealed class RangeRun(DesignFile design, ColumnMap columns, NumberSynta
                 plan.FirstLines[range]);
             rows.StopLine = range + 1 < plan.Count ? plan.FirstLines[range + 1] : int.MaxValue;
             set = new ColumnSet(design, columns, numbers, inherited, reserve is null ? null : (reserve, range));
-            while (range < Volatile.Read(ref _faulty) && rows.Next())
-            {
-                set.Take(rows);
-                if (!_origins[range].Task.IsCompleted && set.OriginsKnown)
-                {
-                    HandOn(range, set.Origins());
-                }
-            }
-
+            Fill(range, rows, set);
             if (rows.Fault is { } fault)
             {
                 Fail(range);

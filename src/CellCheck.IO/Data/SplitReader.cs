@@ -32,14 +32,7 @@ internal static class SplitReader
         try
         {
             first.StopLine = plan.FirstLines[1];
-            while (first.Next())
-            {
-                head.Take(first);
-                if (!run.OriginsAfter(0).IsCompleted && head.OriginsKnown)
-                {
-                    run.HandOn(0, head.Origins());
-                }
-            }
+            run.Fill(0, first, head);
 
             if (first.Fault is not null)
             {
